@@ -1,0 +1,85 @@
+import { existsSync } from 'node:fs';
+import path from 'node:path';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import connectPgSimple from 'connect-pg-simple';
+import helmet from 'helmet';
+import pg from 'pg';
+import { config as defaultConfig, type Config } from './config';
+import { loadUser } from './middlewares/authenticate';
+import { requireCsrf } from './middlewares/csrf';
+import { apiNotFound, errorHandler } from './middlewares/error-handler';
+import { authRouter } from './routes/auth/auth.router';
+import { healthRouter } from './routes/health/health.router';
+import { invitationsRouter } from './routes/invitations/invitations.router';
+import { outboxRouter } from './routes/outbox/outbox.router';
+import { studiosRouter } from './routes/studios/studios.router';
+import { tutorialsRouter } from './routes/tutorials/tutorials.router';
+
+type Overrides = { config?: Partial<Config>; rateLimit?: Partial<Config['rateLimit']> };
+
+/** Builds the Express app; tests import this and drive it through supertest. */
+export function createApp(overrides: Overrides = {}): Express & { close: () => Promise<void> } {
+  const config = { ...defaultConfig, ...overrides.config };
+  const rl = { ...config.rateLimit, ...overrides.rateLimit };
+  const app = express() as Express & { close: () => Promise<void> };
+  app.disable('x-powered-by');
+  app.set('trust proxy', 'loopback');
+
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          defaultSrc: ["'self'"],
+          imgSrc: ["'self'", 'data:', 'blob:'],
+          mediaSrc: ["'self'", 'blob:'],
+          styleSrc: ["'self'", "'unsafe-inline'"],
+          fontSrc: ["'self'", 'data:'],
+          connectSrc: ["'self'"],
+          upgradeInsecureRequests: null,
+        },
+      },
+      // Plain HTTP on loopback: HSTS would lock a developer's browser to HTTPS for 127.0.0.1.
+      strictTransportSecurity: config.secureCookies,
+    }),
+  );
+
+  const pool = new pg.Pool({ connectionString: config.databaseUrl, max: 5 });
+  const PgStore = connectPgSimple(session);
+  app.use(
+    session({
+      name: 'cardwright.sid',
+      store: new PgStore({ pool, tableName: 'session', createTableIfMissing: false, pruneSessionInterval: 15 * 60 }),
+      secret: config.sessionSecret,
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: config.secureCookies, maxAge: 14 * 24 * 60 * 60_000 },
+    }),
+  );
+
+  const api = express.Router();
+  api.use(express.json({ limit: '5mb' }));
+  api.use(loadUser);
+  api.use(requireCsrf);
+  api.use('/health', healthRouter());
+  api.use('/auth', authRouter({ signInLimit: rl.signIn, windowMs: rl.windowMs }));
+  api.use('/invitations', invitationsRouter());
+  api.use('/studios', studiosRouter());
+  api.use('/tutorials', tutorialsRouter());
+  api.use('/outbox', outboxRouter(config.mail.fake));
+  api.use(apiNotFound);
+  app.use('/api', api);
+
+  // The built client: static files, then index.html for every client route.
+  if (existsSync(path.join(config.clientDir, 'index.html'))) {
+    app.use(express.static(config.clientDir, { index: false, maxAge: '1h' }));
+    app.get(/^\/(?!api\/|media\/).*/, (_req, res) => res.sendFile(path.join(config.clientDir, 'index.html')));
+  }
+
+  app.use(errorHandler);
+  app.close = async () => {
+    await pool.end();
+  };
+  return app;
+}

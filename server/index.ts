@@ -1,0 +1,24 @@
+import { createServer, type Server } from 'node:http';
+import { config } from './config';
+import { sequelize } from './models';
+import { createApp } from './app';
+
+/** Boots the database connection and the HTTP server; resolves once it listens. */
+export async function startServer(opts: { port?: number } = {}): Promise<{ server: Server; stop: () => Promise<void> }> {
+  await sequelize.authenticate();
+  const app = createApp();
+  const server = createServer(app);
+  server.requestTimeout = 0; // multi-GB uploads take longer than Node's default five minutes
+  const port = opts.port ?? config.port;
+  await new Promise<void>((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(port, config.host, resolve);
+  });
+  const stop = async () => {
+    server.close();
+    server.closeAllConnections();
+    await app.close();
+    await sequelize.close();
+  };
+  return { server, stop };
+}

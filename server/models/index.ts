@@ -1,0 +1,29 @@
+import { sequelize } from '../db';
+import { Invitation } from './invitation';
+import { Membership } from './membership';
+import { OutboxMessage } from './outbox-message';
+import { PasswordReset } from './password-reset';
+import { Studio } from './studio';
+import { Tutorial } from './tutorial';
+import { User } from './user';
+
+User.initModel(sequelize);
+Studio.initModel(sequelize);
+Membership.initModel(sequelize);
+Invitation.initModel(sequelize);
+PasswordReset.initModel(sequelize);
+OutboxMessage.initModel(sequelize);
+Tutorial.initModel(sequelize);
+
+Studio.hasMany(Membership, { foreignKey: 'studioId', as: 'memberships' });
+Membership.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
+User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Invitation.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
+Invitation.belongsTo(User, { foreignKey: 'invitedById', as: 'invitedBy' });
+PasswordReset.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Studio.hasMany(Tutorial, { foreignKey: 'studioId', as: 'tutorials' });
+Tutorial.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
+Tutorial.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+
+export { sequelize, User, Studio, Membership, Invitation, PasswordReset, OutboxMessage, Tutorial };

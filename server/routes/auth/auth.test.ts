@@ -1,0 +1,155 @@
+import { describe, expect, it } from 'vitest';
+import bcrypt from 'bcryptjs';
+import { OutboxMessage, User } from '@server/models';
+import { testApp } from '../../../tests/harness/app';
+import { TestClient } from '../../../tests/harness/client';
+import { makeUser, TEST_PASSWORD } from '../../../tests/harness/factories';
+import { createApp } from '@server/app';
+
+const app = testApp();
+const email = () => `${crypto.randomUUID()}@test.example`;
+
+async function lastMailTo(address: string) {
+  for (let i = 0; i < 50; i++) {
+    const m = await OutboxMessage.findOne({ where: { to: address }, order: [['createdAt', 'DESC']] });
+    if (m) return m;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`no mail to ${address}`);
+}
+
+describe('CSRF (OWASP CSRF Prevention: token on state-changing requests)', () => {
+  it('refuses a state change without the X-CSRF-Token header with 403', async () => {
+    const c = new TestClient(app);
+    const res = await c.agent.post('/api/auth/sign-in').send({ email: 'x@example.com', password: 'whatever' });
+    expect(res.status).toBe(403);
+    expect(res.body.code).toBe('csrf');
+  });
+  it('refuses a token from another session', async () => {
+    const a = new TestClient(app);
+    const b = new TestClient(app);
+    const res = await b.agent.post('/api/auth/sign-in').set('X-CSRF-Token', await a.token()).send({ email: 'x@example.com', password: 'p' });
+    expect(res.status).toBe(403);
+  });
+});
+
+describe('POST /api/auth/sign-up', () => {
+  it('400 with issues for a short password (NIST SP 800-63B-4: at least 15 characters)', async () => {
+    const res = await new TestClient(app).post('/api/auth/sign-up', { name: 'Pat', email: email(), password: 'short pass' });
+    expect(res.status).toBe(400);
+    expect(res.body.issues).toEqual(expect.arrayContaining([expect.objectContaining({ path: 'password' })]));
+  });
+  it('400 for a common password and for one over 72 bytes (bcrypt limit, OWASP Password Storage)', async () => {
+    const c = new TestClient(app);
+    expect((await c.post('/api/auth/sign-up', { name: 'Pat', email: email(), password: 'passwordpassword' })).status).toBe(400);
+    const long = 'é'.repeat(37); // 37 characters but 74 bytes in UTF-8
+    const res = await c.post('/api/auth/sign-up', { name: 'Pat', email: email(), password: long });
+    expect(res.status).toBe(400);
+    expect(res.body.issues[0].message).toMatch(/72 bytes/);
+  });
+  it('accepts a long password with no composition rules and makes the person owner of a new studio', async () => {
+    const c = new TestClient(app);
+    const address = email();
+    const res = await c.post('/api/auth/sign-up', { name: 'Pat Doe', email: address, password: 'all lower case words here' });
+    expect(res.status).toBe(201);
+    expect(res.body.studios).toHaveLength(1);
+    expect(res.body.studios[0].role).toBe('owner');
+    const user = await User.findOne({ where: { email: address } });
+    // bcrypt work factor at least 10 (OWASP Password Storage Cheat Sheet)
+    expect(bcrypt.getRounds(user!.passwordHash)).toBeGreaterThanOrEqual(10);
+    const me = await c.get('/api/auth/me');
+    expect(me.status).toBe(200);
+    expect(me.body.user.email).toBe(address);
+  });
+  it('409 for an e-mail that already has an account', async () => {
+    const u = await makeUser();
+    const res = await new TestClient(app).post('/api/auth/sign-up', { name: 'Again', email: u.email, password: TEST_PASSWORD });
+    expect(res.status).toBe(409);
+  });
+});
+
+describe('POST /api/auth/sign-in and sign-out', () => {
+  it('401 for a wrong password, same message as an unknown e-mail', async () => {
+    const u = await makeUser();
+    const a = await new TestClient(app).post('/api/auth/sign-in', { email: u.email, password: 'not the right one at all' });
+    const b = await new TestClient(app).post('/api/auth/sign-in', { email: email(), password: 'not the right one at all' });
+    expect(a.status).toBe(401);
+    expect(b.status).toBe(401);
+    expect(a.body.error).toBe(b.body.error);
+  });
+  it('400 for a malformed body', async () => {
+    const res = await new TestClient(app).post('/api/auth/sign-in', { email: 'not-an-email' });
+    expect(res.status).toBe(400);
+    expect(res.body.issues.map((i: { path: string }) => i.path).sort()).toEqual(['email', 'password']);
+  });
+  it('signs in with a new session id and HttpOnly, SameSite=Lax cookie (OWASP Session Management)', async () => {
+    const u = await makeUser();
+    const c = new TestClient(app);
+    const before = await c.agent.get('/api/auth/csrf');
+    const sidBefore = String(before.headers['set-cookie']).match(/cardwright\.sid=([^;]+)/)?.[1];
+    const res = await c.signIn(u.email, TEST_PASSWORD);
+    expect(res.status).toBe(200);
+    const cookie = String(res.headers['set-cookie']);
+    expect(cookie).toMatch(/HttpOnly/i);
+    expect(cookie).toMatch(/SameSite=Lax/i);
+    const sidAfter = cookie.match(/cardwright\.sid=([^;]+)/)?.[1];
+    expect(sidAfter).toBeTruthy();
+    expect(sidAfter).not.toBe(sidBefore);
+    expect(res.body.csrfToken).toBeTruthy();
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+  });
+  it('sign-out destroys the session', async () => {
+    const u = await makeUser();
+    const c = new TestClient(app);
+    await c.signIn(u.email, TEST_PASSWORD);
+    expect((await c.post('/api/auth/sign-out')).status).toBe(204);
+    expect((await c.get('/api/auth/me')).status).toBe(401);
+  });
+  it('rate-limits sign-in attempts with 429', async () => {
+    const limited = createApp({ rateLimit: { signIn: 3 } });
+    const c = new TestClient(limited);
+    const statuses = [];
+    for (let i = 0; i < 5; i++) statuses.push((await c.post('/api/auth/sign-in', { email: 'nobody@example.com', password: 'wrong wrong wrong' })).status);
+    expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
+    expect(statuses[4]).toBe(429);
+    await limited.close();
+  });
+});
+
+describe('password reset by e-mail', () => {
+  it('answers the same for unknown addresses and sends no mail', async () => {
+    const address = email();
+    const res = await new TestClient(app).post('/api/auth/reset-request', { email: address });
+    expect(res.status).toBe(202);
+    await new Promise((r) => setTimeout(r, 300));
+    expect(await OutboxMessage.count({ where: { to: address } })).toBe(0);
+  });
+  it('mails a single-use link that sets a new password', async () => {
+    const u = await makeUser();
+    const c = new TestClient(app);
+    expect((await c.post('/api/auth/reset-request', { email: u.email })).status).toBe(202);
+    const mail = await lastMailTo(u.email);
+    const token = mail.text.match(/\/reset\/([\w-]+)/)![1];
+    const bad = await c.post('/api/auth/reset', { token, password: 'short' });
+    expect(bad.status).toBe(400);
+    const ok = await c.post('/api/auth/reset', { token, password: 'a brand new passphrase' });
+    expect(ok.status).toBe(200);
+    const again = await new TestClient(app).post('/api/auth/reset', { token, password: 'another new passphrase' });
+    expect(again.status).toBe(400);
+    expect((await new TestClient(app).signIn(u.email, 'a brand new passphrase')).status).toBe(200);
+    expect((await new TestClient(app).signIn(u.email, TEST_PASSWORD)).status).toBe(401);
+  });
+});
+
+describe('GET /api/health', () => {
+  it('answers 200 with the database state', async () => {
+    const res = await new TestClient(app).get('/api/health');
+    expect(res.status).toBe(200);
+    expect(res.body.database).toBe('up');
+  });
+  it('unknown API paths answer JSON 404', async () => {
+    const res = await new TestClient(app).get('/api/no-such-thing');
+    expect(res.status).toBe(404);
+    expect(res.body.error).toBeTruthy();
+  });
+});

@@ -1,0 +1,42 @@
+import { z } from 'zod';
+import { uuidSchema } from './studio';
+
+export const TUTORIAL_STATES = ['draft', 'in_review', 'needs_changes', 'approved', 'published'] as const;
+export const tutorialStateSchema = z.enum(TUTORIAL_STATES);
+export type TutorialState = z.infer<typeof tutorialStateSchema>;
+
+/** The words the interface shows for each state (DESIGN.md vocabulary). */
+export const STATE_LABELS: Record<TutorialState, string> = {
+  draft: 'draft',
+  in_review: 'in review',
+  needs_changes: 'needs changes',
+  approved: 'approved',
+  published: 'published',
+};
+
+export const precisionSchema = z.union([z.literal(8), z.literal(16), z.literal(32)]);
+
+const title = z.string().trim().min(1, 'Give the tutorial a title').max(160, 'Keep the title under 160 characters');
+
+export const createTutorialSchema = z.object({
+  studioId: uuidSchema,
+  title,
+  dueDate: z.iso.date('Use a date like 2027-01-31').nullable().optional(),
+});
+export type CreateTutorialInput = z.infer<typeof createTutorialSchema>;
+
+export const updateTutorialSchema = z
+  .object({
+    title,
+    dueDate: z.iso.date('Use a date like 2027-01-31').nullable(),
+    precision: precisionSchema,
+    defaultUnit: z.enum(['in', 'mm', 'cm']),
+  })
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, 'Nothing to change');
+export type UpdateTutorialInput = z.infer<typeof updateTutorialSchema>;
+
+export const listTutorialsQuery = z.object({
+  state: tutorialStateSchema.optional(),
+  q: z.string().trim().max(160).optional(),
+});

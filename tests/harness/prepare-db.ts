@@ -1,0 +1,17 @@
+import { ensureDatabase, startCluster } from '../../scripts/lib/cluster';
+import { appEnv } from '../../scripts/lib/env';
+
+/**
+ * Makes the test database ready. `npm test` has done it already (fresh database, migrations);
+ * running Vitest directly does it here so a single file can be run on its own.
+ */
+export async function prepareTestDatabase(): Promise<void> {
+  if (process.env.CARDWRIGHT_TEST_PREPARED) return;
+  startCluster();
+  await ensureDatabase('cardwright_test');
+  Object.assign(process.env, appEnv('test', 3999), { SMTP_PORT: process.env.SMTP_PORT ?? '2700', BCRYPT_ROUNDS: '10', CARDWRIGHT_TEST_PREPARED: '1' });
+  const { migrate } = await import('../../server/services/database');
+  const { sequelize } = await import('../../server/models');
+  await migrate();
+  await sequelize.close();
+}
