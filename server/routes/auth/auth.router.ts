@@ -2,11 +2,13 @@ import { Router, type Request } from 'express';
 import rateLimit from 'express-rate-limit';
 import { resetRequestSchema, resetSchema, signInSchema, signUpSchema } from '@shared/schemas/auth';
 import { User } from '../../models';
+import { config } from '../../config';
 import { validate } from '../../middlewares/validate';
 import { csrfToken } from '../../middlewares/csrf';
 import { HttpError } from '../../lib/http-error';
 import { burnPasswordCheck, verifyPassword } from '../../services/passwords';
 import { requestPasswordReset, resetPassword, signUp, studiosOf } from '../../services/accounts';
+import { DEMO_PASSWORD, DEMO_PEOPLE, demoPresent } from '../../services/seed';
 
 /** Starts a fresh session for the person (OWASP Session Management: new id at sign-in). */
 function startSession(req: Request, userId: string): Promise<string> {
@@ -21,7 +23,9 @@ function startSession(req: Request, userId: string): Promise<string> {
 }
 
 async function me(user: User) {
-  return { user: user.toPublic(), studios: await studiosOf(user.id) };
+  const studios = await studiosOf(user.id);
+  // The Outbox exists only while mail goes to the local fake, and only owners read it.
+  return { user: user.toPublic(), studios, outbox: config.mail.fake && studios.some((s) => s.role === 'owner') };
 }
 
 /** Sign-up, sign-in, sign-out, the CSRF token, the current person and password resets. */
@@ -38,6 +42,12 @@ export function authRouter(opts: { signInLimit: number; windowMs: number }) {
   r.get('/csrf', (req, res) => {
     const token = csrfToken(req);
     req.session.save(() => res.json({ token }));
+  });
+
+  // The sign-in page lists the demo people while the demo studio exists.
+  r.get('/demo', async (_req, res) => {
+    const present = await demoPresent();
+    res.json(present ? { present, password: DEMO_PASSWORD, people: DEMO_PEOPLE } : { present, people: [] });
   });
 
   r.get('/me', async (req, res) => {

@@ -1,0 +1,6 @@
+export const authKeys = {
+  all: ['auth'] as const,
+  me: () => [...authKeys.all, 'me'] as const,
+  demo: () => [...authKeys.all, 'demo'] as const,
+  invitation: (token: string) => [...authKeys.all, 'invitation', token] as const,
+};

@@ -1,0 +1,13 @@
+import { QueryClient } from '@tanstack/react-query';
+import { ApiError } from './api-client';
+
+/** One query client; 4xx answers are not retried (they will not change on their own). */
+export const queryClient = new QueryClient({
+  defaultOptions: {
+    queries: {
+      staleTime: 15_000,
+      retry: (count, err) => !(err instanceof ApiError && err.status >= 400 && err.status < 500) && count < 2,
+      refetchOnWindowFocus: false,
+    },
+  },
+});
