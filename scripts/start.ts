@@ -19,7 +19,7 @@ const applied = await migrate();
 if (applied.length) console.log(`Applied ${applied.length} migration(s).`);
 const { seedDemo } = await import('../server/services/seed');
 await seedDemo(console.log);
-buildClientIfStale();
+if (!process.env.CARDWRIGHT_SKIP_BUILD) buildClientIfStale();
 
 const { startFakeSmtp } = await import('../server/fakes/smtp');
 const smtp = await startFakeSmtp({ port: Number(process.env.SMTP_PORT), databaseUrl: process.env.DATABASE_URL! });

@@ -28,7 +28,7 @@ export function CreateTutorialForm({ studioId, onCreated }: { studioId: string; 
     }
   });
   return (
-    <form onSubmit={submit} className="flex flex-wrap items-end gap-3" noValidate aria-label="New tutorial">
+    <form onSubmit={submit} className="flex flex-wrap items-end gap-3" noValidate aria-label="Start a tutorial">
       <TextField className="min-w-64 flex-1" label="New tutorial" placeholder="e.g. Pop-up snowflake card" {...register('title')} error={formState.errors.title?.message} />
       <TextField label="Due" type="date" {...register('dueDate', { setValueAs: (v) => v || null })} error={formState.errors.dueDate?.message} />
       <Button type="submit" busy={create.isPending}>

@@ -1,0 +1,70 @@
+import { describe, expect, it } from 'vitest';
+import { shot, signIn, useBrowser } from './browser';
+
+const browser = useBrowser();
+
+describe('accounts in the browser', () => {
+  it('signs up, signs out, signs in, creates a tutorial, invites a member who follows the mailed link', async () => {
+    const ctx = await browser.context();
+    const page = await ctx.newPage();
+    const email = `owner-${Date.now()}@e2e.example`;
+    const password = 'folded paper lanterns glow';
+
+    await page.goto('/sign-up');
+    await page.getByLabel('Your name').fill('Rowan Pike');
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill('too short');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await expect.poll(() => page.getByText('Use at least 15 characters').isVisible()).toBe(true);
+    await page.getByLabel('Password').fill(password);
+    await page.getByLabel('Studio name').fill('Pike Paper Works');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await page.waitForURL(/\/studios\//);
+    await expect.poll(() => page.getByText('No tutorials yet').isVisible()).toBe(true);
+    await shot(page, 'studio-empty');
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/\/sign-in/);
+    await signIn(page, email, password);
+
+    await page.getByLabel('New tutorial').fill('Pop-up snowflake card');
+    await page.getByRole('button', { name: 'Create tutorial' }).click();
+    await page.waitForURL(/\/tutorials\/.+\/footage/);
+    await expect.poll(() => page.getByRole('heading', { name: 'Pop-up snowflake card' }).isVisible()).toBe(true);
+    for (const s of ['Footage', 'Cut list', 'Supplies', 'Write-up', 'Publish']) expect(await page.getByRole('link', { name: s, exact: true }).count()).toBe(1);
+    await shot(page, 'tutorial-footage');
+
+    await page.getByRole('link', { name: 'Tutorials' }).click();
+    await expect.poll(() => page.getByRole('link', { name: 'Pop-up snowflake card' }).isVisible()).toBe(true);
+    await shot(page, 'studio-list');
+
+    const invitee = `maker-${Date.now()}@e2e.example`;
+    await page.getByRole('link', { name: 'Members' }).click();
+    await page.getByLabel('E-mail', { exact: true }).fill(invitee);
+    await page.getByLabel('Role', { exact: true }).selectOption('maker');
+    await page.getByRole('button', { name: 'Send invitation' }).click();
+    await expect.poll(() => page.getByText(`Invitation sent to ${invitee}.`).isVisible()).toBe(true);
+    await shot(page, 'members');
+
+    await page.getByRole('link', { name: 'Outbox' }).click();
+    await page.getByRole('link', { name: /invited you to Pike Paper Works/ }).first().click();
+    const link = page.getByRole('link', { name: /\/invite\// });
+    const href = await link.getAttribute('href');
+    expect(href).toMatch(/\/invite\//);
+    await shot(page, 'outbox');
+
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/\/sign-in/);
+    await page.goto(href!);
+    await page.getByRole('link', { name: 'Create your account' }).click();
+    await page.getByLabel('Your name').fill('Ada Quill');
+    expect(await page.getByLabel('E-mail').inputValue()).toBe(invitee);
+    await page.getByLabel('Password').fill('scissors and bone folders');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await page.waitForURL(/\/studios\//);
+    await expect.poll(() => page.getByRole('link', { name: 'Pop-up snowflake card' }).isVisible()).toBe(true);
+    expect(await page.locator('header').getByText('Maker').isVisible()).toBe(true);
+    await shot(page, 'invitee-studio');
+    await ctx.close();
+  });
+});
