@@ -19,14 +19,14 @@ export default defineConfig({
     projects: [
       {
         resolve: { alias },
-        test: { name: 'unit', include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts', 'src/**/*.test.ts', 'server/services/media/**/*.test.ts'], testTimeout: 60_000 },
+        test: { name: 'unit', include: ['shared/**/*.test.ts', 'scripts/**/*.test.ts', 'src/**/*.test.ts', 'server/services/media/**/*.test.ts', 'server/services/article/**/*.test.ts', 'server/services/publish/**/*.test.ts'], testTimeout: 60_000 },
       },
       {
         resolve: { alias },
         test: {
           name: 'api',
           include: ['server/**/*.test.ts'],
-          exclude: ['server/services/media/**'],
+          exclude: ['server/services/media/**', 'server/services/article/**', 'server/services/publish/**'],
           globalSetup: ['tests/harness/global-setup.ts'],
           testTimeout: 60_000,
           hookTimeout: 120_000,
