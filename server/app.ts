@@ -15,6 +15,8 @@ import { invitationsRouter } from './routes/invitations/invitations.router';
 import { outboxRouter } from './routes/outbox/outbox.router';
 import { studiosRouter } from './routes/studios/studios.router';
 import { tutorialsRouter } from './routes/tutorials/tutorials.router';
+import { recordingsRouter, tutorialRecordingsRouter } from './routes/recordings/recordings.router';
+import { mediaRouter } from './routes/media/media.router';
 
 type Overrides = { config?: Partial<Config>; rateLimit?: Partial<Config['rateLimit']> };
 
@@ -67,9 +69,12 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   api.use('/invitations', invitationsRouter());
   api.use('/studios', studiosRouter());
   api.use('/tutorials', tutorialsRouter());
+  api.use('/tutorials', tutorialRecordingsRouter());
+  api.use(recordingsRouter());
   api.use('/outbox', outboxRouter(config.mail.fake));
   api.use(apiNotFound);
   app.use('/api', api);
+  app.use('/media', loadUser, mediaRouter(), (_req, res) => res.status(404).json({ error: 'File was not found' }));
 
   // The built client: static files, then index.html for every client route.
   if (existsSync(path.join(config.clientDir, 'index.html'))) {

@@ -2,6 +2,7 @@ import { createServer, type Server } from 'node:http';
 import { config } from './config';
 import { sequelize } from './models';
 import { createApp } from './app';
+import { startWorkers, stopQueue } from './jobs';
 
 /** Boots the database connection and the HTTP server; resolves once it listens. */
 export async function startServer(opts: { port?: number } = {}): Promise<{ server: Server; stop: () => Promise<void> }> {
@@ -9,6 +10,8 @@ export async function startServer(opts: { port?: number } = {}): Promise<{ serve
   const app = createApp();
   const server = createServer(app);
   server.requestTimeout = 0; // multi-GB uploads take longer than Node's default five minutes
+  // Workers run in the app process by default; WORKERS=off leaves ffmpeg to other machines.
+  if (process.env.WORKERS !== 'off') await startWorkers();
   const port = opts.port ?? config.port;
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
@@ -17,6 +20,7 @@ export async function startServer(opts: { port?: number } = {}): Promise<{ serve
   const stop = async () => {
     server.close();
     server.closeAllConnections();
+    await stopQueue();
     await app.close();
     await sequelize.close();
   };
