@@ -54,7 +54,7 @@ switch (command) {
     await withDatabase(async () => {
       const { migrate } = await import('../server/services/database');
       await migrate();
-      const { seedDemo } = await import('../server/services/seed');
+      const { seedDemo } = await import('../server/seed');
       await seedDemo(console.log);
     });
     break;
@@ -63,7 +63,7 @@ switch (command) {
       const { migrate, migrateDownAll } = await import('../server/services/database');
       await migrateDownAll();
       await migrate();
-      const { seedDemo } = await import('../server/services/seed');
+      const { seedDemo } = await import('../server/seed');
       await seedDemo(console.log);
       console.log('The development database was reset and seeded.');
     });

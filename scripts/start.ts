@@ -17,7 +17,7 @@ Object.assign(process.env, appEnv('dev', port));
 const { migrate } = await import('../server/services/database');
 const applied = await migrate();
 if (applied.length) console.log(`Applied ${applied.length} migration(s).`);
-const { seedDemo } = await import('../server/services/seed');
+const { seedDemo } = await import('../server/seed');
 await seedDemo(console.log);
 if (!process.env.CARDWRIGHT_SKIP_BUILD) buildClientIfStale();
 

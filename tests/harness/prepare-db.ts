@@ -1,3 +1,6 @@
+import { mkdtempSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import { ensureDatabase, startCluster } from '../../scripts/lib/cluster';
 import { appEnv } from '../../scripts/lib/env';
 
@@ -10,6 +13,8 @@ export async function prepareTestDatabase(): Promise<void> {
   startCluster();
   await ensureDatabase('cardwright_test');
   Object.assign(process.env, appEnv('test', 3999), { SMTP_PORT: process.env.SMTP_PORT ?? '2700', BCRYPT_ROUNDS: '10', CARDWRIGHT_TEST_PREPARED: '1' });
+  // Test uploads never land in the development media folder.
+  process.env.MEDIA_DIR ??= mkdtempSync(path.join(os.tmpdir(), 'cardwright-test-media-'));
   const { migrate } = await import('../../server/services/database');
   const { sequelize } = await import('../../server/models');
   await migrate();

@@ -8,7 +8,7 @@ import { csrfToken } from '../../middlewares/csrf';
 import { HttpError } from '../../lib/http-error';
 import { burnPasswordCheck, verifyPassword } from '../../services/passwords';
 import { requestPasswordReset, resetPassword, signUp, studiosOf } from '../../services/accounts';
-import { DEMO_PASSWORD, DEMO_PEOPLE, demoPresent } from '../../services/seed';
+import { DEMO_PASSWORD, DEMO_PEOPLE, demoPresent } from '../../seed';
 
 /** Starts a fresh session for the person (OWASP Session Management: new id at sign-in). */
 function startSession(req: Request, userId: string): Promise<string> {

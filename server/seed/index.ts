@@ -1,6 +1,7 @@
 import type { Role } from '@shared/schemas/roles';
 import { Membership, Studio, Tutorial, User, sequelize } from '../models';
-import { hashPassword } from './passwords';
+import { hashPassword } from '../services/passwords';
+import { seedDemoFootage } from './demo-footage';
 
 export const DEMO_PASSWORD = 'cardwright-demo';
 export const DEMO_STUDIO = { name: 'Juniper Lane Paper Co.', slug: 'juniper-lane' };
@@ -38,8 +39,9 @@ export async function seedDemo(log: (s: string) => void = () => {}): Promise<voi
     { slug: 'gatefold-birthday-card', title: 'Gatefold birthday card with a pocket', state: 'in_review' as const, dueDate: '2026-12-20', author: people.maker },
     { slug: 'hexagon-treat-box', title: 'Hexagon treat box', state: 'published' as const, dueDate: null, author: people.coordinator },
   ];
+  const made: Record<string, Tutorial> = {};
   for (const t of tutorials) {
-    await Tutorial.findOrCreate({
+    [made[t.slug]] = await Tutorial.findOrCreate({
       where: { studioId: studio.id, slug: t.slug },
       defaults: {
         studioId: studio.id,
@@ -52,5 +54,6 @@ export async function seedDemo(log: (s: string) => void = () => {}): Promise<voi
       },
     });
   }
+  await seedDemoFootage(made['round-keepsake-box'], people.maker, log);
   log(createdStudio ? `Seeded the demo studio "${studio.name}".` : 'Demo data already present.');
 }
