@@ -17,6 +17,7 @@ import { studiosRouter } from './routes/studios/studios.router';
 import { tutorialsRouter } from './routes/tutorials/tutorials.router';
 import { recordingsRouter, tutorialRecordingsRouter } from './routes/recordings/recordings.router';
 import { mediaRouter } from './routes/media/media.router';
+import { piecesRouter } from './routes/pieces/pieces.router';
 
 type Overrides = { config?: Partial<Config>; rateLimit?: Partial<Config['rateLimit']> };
 
@@ -71,6 +72,7 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   api.use('/tutorials', tutorialsRouter());
   api.use('/tutorials', tutorialRecordingsRouter());
   api.use(recordingsRouter());
+  api.use(piecesRouter());
   api.use('/outbox', outboxRouter(config.mail.fake));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -10,6 +10,8 @@ import { Recording } from './recording';
 import { Cue } from './cue';
 import { Chapter } from './chapter';
 import { Still } from './still';
+import { PieceRow } from './piece';
+import { Material, MentionDismissal } from './material';
 
 User.initModel(sequelize);
 Studio.initModel(sequelize);
@@ -22,6 +24,9 @@ Recording.initModel(sequelize);
 Cue.initModel(sequelize);
 Chapter.initModel(sequelize);
 Still.initModel(sequelize);
+PieceRow.initModel(sequelize);
+Material.initModel(sequelize);
+MentionDismissal.initModel(sequelize);
 
 Studio.hasMany(Membership, { foreignKey: 'studioId', as: 'memberships' });
 Membership.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
@@ -41,5 +46,10 @@ Recording.hasMany(Chapter, { foreignKey: 'recordingId', as: 'chapters' });
 Recording.hasMany(Still, { foreignKey: 'recordingId', as: 'stills' });
 Chapter.belongsTo(Recording, { foreignKey: 'recordingId', as: 'recording' });
 Still.belongsTo(Recording, { foreignKey: 'recordingId', as: 'recording' });
+Tutorial.hasMany(PieceRow, { foreignKey: 'tutorialId', as: 'pieces' });
+PieceRow.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+Tutorial.hasMany(Material, { foreignKey: 'tutorialId', as: 'materials' });
+Material.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+MentionDismissal.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 
-export { sequelize, Recording, Cue, Chapter, Still, User, Studio, Membership, Invitation, PasswordReset, OutboxMessage, Tutorial };
+export { sequelize, PieceRow, Material, MentionDismissal, Recording, Cue, Chapter, Still, User, Studio, Membership, Invitation, PasswordReset, OutboxMessage, Tutorial };

@@ -1,0 +1,48 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+/** A paper or cardstock a tutorial's pieces are cut from, with its stock sheet. */
+export class Material extends Model<InferAttributes<Material>, InferCreationAttributes<Material>> {
+  declare id: CreationOptional<string>;
+  declare tutorialId: ForeignKey<string>;
+  declare name: string;
+  declare kind: CreationOptional<string>;
+  declare sheetWidth: string;
+  declare sheetHeight: string;
+  /** False for directional prints: pieces keep their orientation on the sheet. */
+  declare rotate: CreationOptional<boolean>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    Material.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        name: { type: DataTypes.TEXT, allowNull: false },
+        kind: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'cardstock' },
+        sheetWidth: { type: DataTypes.TEXT, allowNull: false },
+        sheetHeight: { type: DataTypes.TEXT, allowNull: false },
+        rotate: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'materials' },
+    );
+  }
+}
+
+/** A transcript mention the maker marked as not a piece. */
+export class MentionDismissal extends Model<InferAttributes<MentionDismissal>, InferCreationAttributes<MentionDismissal>> {
+  declare id: CreationOptional<string>;
+  declare tutorialId: ForeignKey<string>;
+  declare mentionKey: string;
+
+  static initModel(sequelize: Sequelize) {
+    MentionDismissal.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        mentionKey: { type: DataTypes.TEXT, allowNull: false },
+      },
+      { sequelize, tableName: 'mention_dismissals' },
+    );
+  }
+}

@@ -1,0 +1,45 @@
+import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+/** A score line as stored: the position is an exact serialized length ("17/4 in"). */
+export type StoredScoreLine = { axis: 'width' | 'height'; at: string; tab?: boolean };
+
+/** One row of a tutorial's cut list; lengths are exact serialized rationals, never floats. */
+export class PieceRow extends Model<InferAttributes<PieceRow>, InferCreationAttributes<PieceRow>> {
+  declare id: CreationOptional<string>;
+  declare tutorialId: ForeignKey<string>;
+  declare position: CreationOptional<number>;
+  declare name: string;
+  declare material: CreationOptional<string>;
+  declare quantity: CreationOptional<number>;
+  declare shape: CreationOptional<'rect' | 'circle'>;
+  declare width: string;
+  declare height: string;
+  declare scoreLines: CreationOptional<StoredScoreLine[]>;
+  declare matOnId: CreationOptional<string | null>;
+  declare notes: CreationOptional<string>;
+  declare saidAtMs: CreationOptional<number | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize) {
+    PieceRow.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+        name: { type: DataTypes.TEXT, allowNull: false },
+        material: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        quantity: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        shape: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'rect' },
+        width: { type: DataTypes.TEXT, allowNull: false },
+        height: { type: DataTypes.TEXT, allowNull: false },
+        scoreLines: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+        matOnId: { type: DataTypes.UUID, allowNull: true },
+        notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        saidAtMs: { type: DataTypes.INTEGER, allowNull: true },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'pieces' },
+    );
+  }
+}
