@@ -62,6 +62,10 @@ switch (command) {
     await withDatabase(async () => {
       const { migrate, migrateDownAll } = await import('../server/services/database');
       await migrateDownAll();
+      // Media files belong to the rows just dropped.
+      const { config } = await import('../server/config');
+      const { rm } = await import('node:fs/promises');
+      await rm(path.join(config.mediaDir, 'recordings'), { recursive: true, force: true });
       await migrate();
       const { seedDemo } = await import('../server/seed');
       await seedDemo(console.log);

@@ -18,6 +18,7 @@ import { tutorialsRouter } from './routes/tutorials/tutorials.router';
 import { recordingsRouter, tutorialRecordingsRouter } from './routes/recordings/recordings.router';
 import { mediaRouter } from './routes/media/media.router';
 import { piecesRouter } from './routes/pieces/pieces.router';
+import { suppliesRouter } from './routes/supplies/supplies.router';
 
 type Overrides = { config?: Partial<Config>; rateLimit?: Partial<Config['rateLimit']> };
 
@@ -73,6 +74,7 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   api.use('/tutorials', tutorialRecordingsRouter());
   api.use(recordingsRouter());
   api.use(piecesRouter());
+  api.use(suppliesRouter());
   api.use('/outbox', outboxRouter(config.mail.fake));
   api.use(apiNotFound);
   app.use('/api', api);

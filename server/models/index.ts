@@ -12,6 +12,7 @@ import { Chapter } from './chapter';
 import { Still } from './still';
 import { PieceRow } from './piece';
 import { Material, MentionDismissal } from './material';
+import { Article, Revision, Supply } from './article';
 
 User.initModel(sequelize);
 Studio.initModel(sequelize);
@@ -27,6 +28,9 @@ Still.initModel(sequelize);
 PieceRow.initModel(sequelize);
 Material.initModel(sequelize);
 MentionDismissal.initModel(sequelize);
+Article.initModel(sequelize);
+Revision.initModel(sequelize);
+Supply.initModel(sequelize);
 
 Studio.hasMany(Membership, { foreignKey: 'studioId', as: 'memberships' });
 Membership.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
@@ -51,5 +55,11 @@ PieceRow.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 Tutorial.hasMany(Material, { foreignKey: 'tutorialId', as: 'materials' });
 Material.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 MentionDismissal.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+Article.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
+Revision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+Article.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+Revision.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+Supply.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+Tutorial.hasMany(Supply, { foreignKey: 'tutorialId', as: 'supplies' });
 
-export { sequelize, PieceRow, Material, MentionDismissal, Recording, Cue, Chapter, Still, User, Studio, Membership, Invitation, PasswordReset, OutboxMessage, Tutorial };
+export { sequelize, Article, Revision, Supply, PieceRow, Material, MentionDismissal, Recording, Cue, Chapter, Still, User, Studio, Membership, Invitation, PasswordReset, OutboxMessage, Tutorial };

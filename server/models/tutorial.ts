@@ -15,6 +15,8 @@ export class Tutorial extends Model<InferAttributes<Tutorial>, InferCreationAttr
   declare precision: CreationOptional<8 | 16 | 32>;
   declare defaultUnit: CreationOptional<'in' | 'mm' | 'cm'>;
   declare publishedAt: CreationOptional<Date | null>;
+  /** The sponsorship disclosure; null means the default wording. */
+  declare disclosure: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare studio?: NonAttribute<Studio>;
@@ -31,6 +33,7 @@ export class Tutorial extends Model<InferAttributes<Tutorial>, InferCreationAttr
         precision: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 16 },
         defaultUnit: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'in' },
         publishedAt: { type: DataTypes.DATE, allowNull: true },
+        disclosure: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

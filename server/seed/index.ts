@@ -2,6 +2,7 @@ import type { Role } from '@shared/schemas/roles';
 import { Membership, Studio, Tutorial, User, sequelize } from '../models';
 import { hashPassword } from '../services/passwords';
 import { seedDemoFootage } from './demo-footage';
+import { seedDemoCutList } from './demo-cut-list';
 
 export const DEMO_PASSWORD = 'cardwright-demo';
 export const DEMO_STUDIO = { name: 'Juniper Lane Paper Co.', slug: 'juniper-lane' };
@@ -55,5 +56,6 @@ export async function seedDemo(log: (s: string) => void = () => {}): Promise<voi
     });
   }
   await seedDemoFootage(made['round-keepsake-box'], people.maker, log);
+  await seedDemoCutList(made['round-keepsake-box']);
   log(createdStudio ? `Seeded the demo studio "${studio.name}".` : 'Demo data already present.');
 }
