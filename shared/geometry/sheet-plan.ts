@@ -1,3 +1,12 @@
+/**
+ * Sheet plan: pieces laid out on stock sheets so a paper trimmer can cut them.
+ *
+ * Why our own packer: the registry's rectangle packers are maxrects (layouts a
+ * trimmer cannot always cut), grow a single bin instead of filling fixed sheets,
+ * or have no rotation switch; none keeps exact lengths. This one is a guillotine
+ * free-rectangle packer on an exact integer grid (inches times the common
+ * denominator of every length), so no float error can let two pieces overlap.
+ */
 import Fraction from 'fraction.js';
 import { formatLength, toInches, type Length } from '../measure/length';
 import { commonScale, scaled } from './guillotine';

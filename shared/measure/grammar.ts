@@ -344,10 +344,12 @@ export class Grammar {
         if (!u) return null;
       } else {
         u = this.unit(k);
-        if (!u && form === 'fraction' && this.word(k) === 'of') {
-          let m = k + 1;
+        // "a sixteenth of an inch", "a half an inch"
+        if (!u && form === 'fraction') {
+          let m = k;
+          if (this.word(m) === 'of') m++;
           if (this.word(m) === 'a' || this.word(m) === 'an') m++;
-          u = this.unit(m);
+          if (m > k) u = this.unit(m);
         }
       }
     }

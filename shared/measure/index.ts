@@ -15,5 +15,6 @@ export {
   type TextMention,
 } from './mentions';
 export * from './ruler';
+export { displayLength, lengthSummary, type LengthDisplay, type LengthSummary } from './display';
 export type { Piece, ScoreAxis, ScoreLine } from './piece';
 export * from './checks';

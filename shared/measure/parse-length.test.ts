@@ -68,6 +68,10 @@ const TABLE: [string, string][] = [
   ['a quarter of an inch', '1/4 in'],
   ['half a centimetre', '1/2 cm'],
   ['an eighth inch', '1/8 in'],
+  ['a half an inch', '1/2 in'],
+  ['a quarter-inch', '1/4 in'],
+  ['three-quarter inch', '3/4 in'],
+  ['one-and-a-half inches', '3/2 in'],
   // units, short and long, both spellings
   ['4 inch', '4 in'],
   ['4 inches', '4 in'],
