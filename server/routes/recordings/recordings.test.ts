@@ -1,4 +1,5 @@
 import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
+import http from 'node:http';
 import path from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { Cue, Recording, Tutorial } from '@server/models';
@@ -84,6 +85,33 @@ describe('POST /api/tutorials/:id/recordings', () => {
       status = (await Recording.findByPk(res.body.id))!.status;
     }
     expect(status).toBe('ready');
+  });
+
+  it('an upload cut off half way leaves no row and no file behind', async () => {
+    const server = app.listen(0);
+    const port = (server.address() as import('node:net').AddressInfo).port;
+    const c = await f.clientFor('maker');
+    const token = await c.token();
+    const cookie = (await c.agent.get('/api/auth/me')).request.cookies as unknown as string;
+    const before = await Recording.count({ where: { tutorialId: f.tutorial.id } });
+    let during = 0;
+    await new Promise<void>((resolve) => {
+      const req = http.request({ host: '127.0.0.1', port, path: `/api/tutorials/${f.tutorial.id}/recordings`, method: 'POST', headers: { cookie, 'x-csrf-token': token, 'content-type': 'multipart/form-data; boundary=XyZ', 'content-length': 50_000_000 } });
+      req.on('error', () => resolve());
+      req.write('--XyZ\r\nContent-Disposition: form-data; name="file"; filename="big.mp4"\r\nContent-Type: video/mp4\r\n\r\n');
+      req.write(readFileSync(clip));
+      // Give the server time to start writing the file, then drop the connection.
+      setTimeout(() => {
+        during = tmpFiles().length;
+        req.destroy();
+        resolve();
+      }, 300);
+    });
+    for (let i = 0; i < 40 && tmpFiles().length > 0; i++) await new Promise((r) => setTimeout(r, 100));
+    server.close();
+    expect(during, 'the partial upload was being written').toBe(1);
+    expect(tmpFiles()).toEqual([]);
+    expect(await Recording.count({ where: { tutorialId: f.tutorial.id } })).toBe(before);
   });
 
   it('a truncated file fails processing with a readable reason', async () => {
