@@ -17,7 +17,10 @@ export function tutorialAbilities(actor: Actor, t: TutorialLike) {
     delete: r === 'owner' || (author && t.state !== 'published'),
     submit: (staff || author) && (t.state === 'draft' || t.state === 'needs_changes'),
     review: staff && t.state === 'in_review',
-    publish: staff && (t.state === 'approved' || t.state === 'published'),
+    approve: staff && t.state === 'in_review',
+    sendBack: staff && (t.state === 'in_review' || t.state === 'approved'),
+    publish: staff && t.state === 'approved',
+    unpublish: staff && t.state === 'published',
     comment: staff || author,
   };
 }

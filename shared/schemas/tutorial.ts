@@ -40,3 +40,14 @@ export const listTutorialsQuery = z.object({
   state: tutorialStateSchema.optional(),
   q: z.string().trim().max(160).optional(),
 });
+
+/** Moves between review states (DESIGN.md T2); the server checks who may make each one. */
+export const TRANSITIONS = {
+  submit: { from: ['draft', 'needs_changes'], to: 'in_review', label: 'Send for review' },
+  approve: { from: ['in_review'], to: 'approved', label: 'Approve' },
+  sendBack: { from: ['in_review', 'approved'], to: 'needs_changes', label: 'Send back' },
+  publish: { from: ['approved'], to: 'published', label: 'Publish' },
+  unpublish: { from: ['published'], to: 'approved', label: 'Unpublish' },
+} as const satisfies Record<string, { from: readonly TutorialState[]; to: TutorialState; label: string }>;
+export type Transition = keyof typeof TRANSITIONS;
+export const transitionSchema = z.object({ action: z.enum(Object.keys(TRANSITIONS) as [Transition, ...Transition[]]), note: z.string().trim().max(2000).optional() });

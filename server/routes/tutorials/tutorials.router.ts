@@ -1,5 +1,6 @@
 import { Router } from 'express';
-import { createTutorialSchema, updateTutorialSchema } from '@shared/schemas/tutorial';
+import { createTutorialSchema, TRANSITIONS, transitionSchema, updateTutorialSchema, type Transition } from '@shared/schemas/tutorial';
+import { notifyStateChange } from '../../services/review';
 import { idParams } from '@shared/schemas/studio';
 import { Tutorial, User } from '../../models';
 import { validate } from '../../middlewares/validate';
@@ -8,6 +9,8 @@ import { authorize, tutorialAbilities } from '../../policies';
 import { loadStudio, loadTutorial } from '../../services/access';
 import { uniqueTutorialSlug } from '../../services/studios';
 import { presentTutorial } from './tutorial.presenter';
+import { HttpError } from '../../lib/http-error';
+import { STATE_LABELS, type TutorialState } from '@shared/schemas/tutorial';
 
 /** Create, read, rename and delete tutorials. */
 export function tutorialsRouter() {
@@ -43,6 +46,20 @@ export function tutorialsRouter() {
       changes.slug = await uniqueTutorialSlug(tutorial.studioId, changes.title, tutorial.id);
     }
     await tutorial.update(changes);
+    res.json(presentTutorial(tutorial, tutorialAbilities(actor, tutorial)));
+  });
+
+  r.post('/:id/state', validate({ params: idParams, body: transitionSchema }), async (req, res) => {
+    const { tutorial, actor, abilities } = await loadTutorial(req, req.params.id as string);
+    const action = req.body.action as Transition;
+    const step = TRANSITIONS[action];
+    if (!(step.from as readonly string[]).includes(tutorial.state)) {
+      throw new HttpError(409, `A tutorial that is ${STATE_LABELS[tutorial.state as TutorialState]} cannot be moved with “${step.label}”`);
+    }
+    authorize(abilities, action, action === 'submit' ? 'Only the maker or a coordinator can send it for review' : 'Only coordinators and owners review and publish');
+    const from = tutorial.state;
+    await tutorial.update({ state: step.to, publishedAt: step.to === 'published' ? new Date() : tutorial.publishedAt });
+    await notifyStateChange({ tutorial, from, by: currentUser(req), note: req.body.note });
     res.json(presentTutorial(tutorial, tutorialAbilities(actor, tutorial)));
   });
 

@@ -78,3 +78,25 @@ describe('PATCH and DELETE /api/tutorials/:id', () => {
     expect(await Tutorial.findByPk(f.tutorial.id)).toBeNull();
   });
 });
+
+describe('POST /api/tutorials/:id/state (review, T2)', () => {
+  it('maker sends for review, a student cannot approve, the coordinator approves and publishes; mail goes out', async () => {
+    const { OutboxMessage } = await import('@server/models');
+    const f = await makeStudio(app);
+    const url = `/api/tutorials/${f.tutorial.id}/state`;
+    expect((await (await f.clientFor('anonymous')).post(url, { action: 'submit' })).status).toBe(401);
+    expect((await (await f.clientFor('maker')).post(url, { action: 'fly' })).status).toBe(400);
+    expect((await (await f.clientFor('maker')).post(url, { action: 'publish' })).status).toBe(409);
+    const sent = await (await f.clientFor('maker')).post(url, { action: 'submit' });
+    expect(sent.body.state).toBe('in_review');
+    expect((await (await f.clientFor('student')).post(url, { action: 'approve' })).status).toBe(403);
+    expect((await (await f.clientFor('maker')).post(url, { action: 'approve' })).status).toBe(403);
+    expect((await (await f.clientFor('coordinator')).post(url, { action: 'approve' })).body.state).toBe('approved');
+    const pub = await (await f.clientFor('coordinator')).post(url, { action: 'publish' });
+    expect(pub.body.state).toBe('published');
+    expect(pub.body.publishedAt).toBeTruthy();
+    for (let i = 0; i < 30 && (await OutboxMessage.count({ where: { to: f.users.maker.email } })) < 2; i++) await new Promise((r) => setTimeout(r, 100));
+    expect(await OutboxMessage.count({ where: { to: f.users.maker.email } })).toBe(2);
+    expect(await OutboxMessage.count({ where: { to: f.users.coordinator.email } })).toBe(1);
+  });
+});
