@@ -19,6 +19,7 @@ import { recordingsRouter, tutorialRecordingsRouter } from './routes/recordings/
 import { mediaRouter } from './routes/media/media.router';
 import { piecesRouter } from './routes/pieces/pieces.router';
 import { suppliesRouter } from './routes/supplies/supplies.router';
+import { articlesRouter } from './routes/articles/articles.router';
 
 type Overrides = { config?: Partial<Config>; rateLimit?: Partial<Config['rateLimit']> };
 
@@ -75,6 +76,7 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   api.use(recordingsRouter());
   api.use(piecesRouter());
   api.use(suppliesRouter());
+  api.use(articlesRouter());
   api.use('/outbox', outboxRouter(config.mail.fake));
   api.use(apiNotFound);
   app.use('/api', api);

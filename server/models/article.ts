@@ -1,8 +1,10 @@
 import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { User } from './user';
 
-/** Tiptap JSON as stored. */
-export type DocJson = { type: 'doc'; content?: unknown[] } & Record<string, unknown>;
+import type { JSONContent } from '@tiptap/core';
+
+/** Tiptap JSON as stored (validated against shared/editor's schema before every save). */
+export type DocJson = JSONContent;
 
 /** A tutorial's current write-up; `version` goes up by one on every save. */
 export class Article extends Model<InferAttributes<Article>, InferCreationAttributes<Article>> {

@@ -42,7 +42,7 @@ export const router = createBrowserRouter([
         element: <TutorialLayoutRoute />,
         children: [
           { index: true, loader: ({ params }) => redirect(paths.tutorialSection(params.tutorialId!, 'footage')) },
-          { path: 'footage', element: <SectionPlaceholder section="footage" /> },
+          { path: 'footage', lazy: async () => ({ Component: (await import('./routes/footage')).FootageRoute }) },
           { path: 'cut-list', element: <SectionPlaceholder section="cut-list" /> },
           { path: 'supplies', element: <SectionPlaceholder section="supplies" /> },
           { path: 'write-up', element: <SectionPlaceholder section="write-up" /> },

@@ -1,0 +1,22 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { footageKeys } from './keys';
+import { uploadFile } from './upload-file';
+
+export type TranscriptUploaded = { format: string; cueCount: number; name: string };
+
+/** Sends a transcript file (.vtt, .srt, .txt); a 422 names the line that could not be read. */
+export const uploadTranscript = ({ recordingId, file }: { recordingId: string; file: File }) =>
+  uploadFile<TranscriptUploaded>(`/recordings/${recordingId}/transcript`, file).done;
+
+export function useUploadTranscript(recordingId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (file: File) => uploadTranscript({ recordingId, file }),
+    onSuccess: () =>
+      Promise.all([
+        qc.invalidateQueries({ queryKey: footageKeys.recording(recordingId) }),
+        qc.invalidateQueries({ queryKey: footageKeys.allCues(recordingId) }),
+        qc.invalidateQueries({ queryKey: footageKeys.chapterSuggestions(recordingId) }),
+      ]),
+  });
+}
