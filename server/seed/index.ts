@@ -3,6 +3,7 @@ import { Membership, Studio, Tutorial, User, sequelize } from '../models';
 import { hashPassword } from '../services/passwords';
 import { seedDemoFootage } from './demo-footage';
 import { seedDemoCutList } from './demo-cut-list';
+import { seedDemoWriteUp } from './demo-write-up';
 
 export const DEMO_PASSWORD = 'cardwright-demo';
 export const DEMO_STUDIO = { name: 'Juniper Lane Paper Co.', slug: 'juniper-lane' };
@@ -36,9 +37,10 @@ export async function seedDemo(log: (s: string) => void = () => {}): Promise<voi
     }
   });
   const tutorials = [
-    { slug: 'round-keepsake-box', title: 'Round keepsake box with a wrapped lid', state: 'draft' as const, dueDate: '2027-01-15', author: people.maker },
+    // The fully built demo is published, so its public page and exports work on first start.
+    { slug: 'round-keepsake-box', title: 'Round keepsake box with a wrapped lid', state: 'published' as const, dueDate: '2026-12-15', author: people.maker },
     { slug: 'gatefold-birthday-card', title: 'Gatefold birthday card with a pocket', state: 'in_review' as const, dueDate: '2026-12-20', author: people.maker },
-    { slug: 'hexagon-treat-box', title: 'Hexagon treat box', state: 'published' as const, dueDate: null, author: people.coordinator },
+    { slug: 'hexagon-treat-box', title: 'Hexagon treat box', state: 'draft' as const, dueDate: '2027-01-15', author: people.maker },
   ];
   const made: Record<string, Tutorial> = {};
   for (const t of tutorials) {
@@ -57,5 +59,6 @@ export async function seedDemo(log: (s: string) => void = () => {}): Promise<voi
   }
   await seedDemoFootage(made['round-keepsake-box'], people.maker, log);
   await seedDemoCutList(made['round-keepsake-box']);
+  await seedDemoWriteUp(made['round-keepsake-box'], people.maker);
   log(createdStudio ? `Seeded the demo studio "${studio.name}".` : 'Demo data already present.');
 }
