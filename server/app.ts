@@ -20,6 +20,8 @@ import { mediaRouter } from './routes/media/media.router';
 import { piecesRouter } from './routes/pieces/pieces.router';
 import { suppliesRouter } from './routes/supplies/supplies.router';
 import { articlesRouter } from './routes/articles/articles.router';
+import { exportsRouter } from './routes/exports/exports.router';
+import { publicRouter } from './routes/public/public.router';
 
 type Overrides = { config?: Partial<Config>; rateLimit?: Partial<Config['rateLimit']> };
 
@@ -71,6 +73,8 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   api.use('/auth', authRouter({ signInLimit: rl.signIn, windowMs: rl.windowMs }));
   api.use('/invitations', invitationsRouter());
   api.use('/studios', studiosRouter());
+  // Exports first: a published tutorial's exports are open to visitors who are not signed in.
+  api.use('/tutorials', exportsRouter());
   api.use('/tutorials', tutorialsRouter());
   api.use('/tutorials', tutorialRecordingsRouter());
   api.use(recordingsRouter());
@@ -80,12 +84,13 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   api.use('/outbox', outboxRouter(config.mail.fake));
   api.use(apiNotFound);
   app.use('/api', api);
+  app.use(publicRouter());
   app.use('/media', loadUser, mediaRouter(), (_req, res) => res.status(404).json({ error: 'File was not found' }));
 
   // The built client: static files, then index.html for every client route.
   if (existsSync(path.join(config.clientDir, 'index.html'))) {
     app.use(express.static(config.clientDir, { index: false, maxAge: '1h' }));
-    app.get(/^\/(?!api\/|media\/).*/, (_req, res) => res.sendFile(path.join(config.clientDir, 'index.html')));
+    app.get(/^\/(?!api\/|media\/|public\/|t\/|print\/).*/, (_req, res) => res.sendFile(path.join(config.clientDir, 'index.html')));
   }
 
   app.use(errorHandler);

@@ -17,6 +17,8 @@ export class Tutorial extends Model<InferAttributes<Tutorial>, InferCreationAttr
   declare publishedAt: CreationOptional<Date | null>;
   /** The sponsorship disclosure; null means the default wording. */
   declare disclosure: CreationOptional<string | null>;
+  /** Where the video is published; used by handouts, QR codes and descriptions. */
+  declare videoUrl: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare studio?: NonAttribute<Studio>;
@@ -34,6 +36,7 @@ export class Tutorial extends Model<InferAttributes<Tutorial>, InferCreationAttr
         defaultUnit: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'in' },
         publishedAt: { type: DataTypes.DATE, allowNull: true },
         disclosure: { type: DataTypes.TEXT, allowNull: true },
+        videoUrl: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

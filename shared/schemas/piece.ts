@@ -20,7 +20,7 @@ export const scoreLineInput = z.object({
 
 const pieceFields = {
   name: z.string().trim().min(1, 'Name the piece').max(120),
-  material: z.string().trim().max(120).default(''),
+  material: z.string().trim().max(120),
   quantity: z.number().int('Use a whole number').min(1, 'At least 1').max(999, 'At most 999'),
   shape: z.enum(['rect', 'circle']),
   width: lengthText,
@@ -34,6 +34,7 @@ const pieceFields = {
 export const createPieceSchema = z
   .object({
     ...pieceFields,
+    material: pieceFields.material.default(''),
     quantity: pieceFields.quantity.default(1),
     shape: pieceFields.shape.default('rect'),
     scoreLines: pieceFields.scoreLines.default([]),
@@ -51,14 +52,19 @@ export const updatePieceSchema = z
   .refine((v) => Object.keys(v).length > 0, 'Nothing to change');
 export type UpdatePieceInput = z.input<typeof updatePieceSchema>;
 
-export const materialSchema = z.object({
+// Defaults only where a record is made: a partial update must not fill in fields it was not given.
+const materialFields = {
   name: z.string().trim().min(1, 'Name the material').max(120),
-  kind: z.enum(['cardstock', 'patterned paper', 'paper', 'vellum', 'acetate', 'other']).default('cardstock'),
+  kind: z.enum(['cardstock', 'patterned paper', 'paper', 'vellum', 'acetate', 'other']),
   sheetWidth: lengthText,
   sheetHeight: lengthText,
-  rotate: z.boolean().default(true),
-});
-export const updateMaterialSchema = materialSchema.partial().refine((v) => Object.keys(v).length > 0, 'Nothing to change');
+  rotate: z.boolean(),
+};
+export const materialSchema = z.object({ ...materialFields, kind: materialFields.kind.default('cardstock'), rotate: materialFields.rotate.default(true) });
+export const updateMaterialSchema = z
+  .object(materialFields)
+  .partial()
+  .refine((v) => Object.keys(v).length > 0, 'Nothing to change');
 
 export const sheetPlanQuery = z.object({
   kits: z.coerce.number().int().min(1, 'At least 1 kit').max(500, 'At most 500 kits').default(1),

@@ -31,6 +31,12 @@ export const updateTutorialSchema = z
     dueDate: z.iso.date('Use a date like 2027-01-31').nullable(),
     precision: precisionSchema,
     defaultUnit: z.enum(['in', 'mm', 'cm']),
+    videoUrl: z
+      .string()
+      .trim()
+      .max(2000)
+      .refine((s) => /^https?:\/\/\S+$/i.test(s), 'Use the full address of the video, starting with https://')
+      .nullable(),
   })
   .partial()
   .refine((v) => Object.keys(v).length > 0, 'Nothing to change');

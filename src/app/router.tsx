@@ -43,7 +43,7 @@ export const router = createBrowserRouter([
         children: [
           { index: true, loader: ({ params }) => redirect(paths.tutorialSection(params.tutorialId!, 'footage')) },
           { path: 'footage', lazy: async () => ({ Component: (await import('./routes/footage')).FootageRoute }) },
-          { path: 'cut-list', element: <SectionPlaceholder section="cut-list" /> },
+          { path: 'cut-list', lazy: async () => ({ Component: (await import('./routes/cut-list')).CutListRoute }) },
           { path: 'supplies', element: <SectionPlaceholder section="supplies" /> },
           { path: 'write-up', element: <SectionPlaceholder section="write-up" /> },
           { path: 'publish', element: <SectionPlaceholder section="publish" /> },

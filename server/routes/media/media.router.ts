@@ -5,10 +5,12 @@ import { validate } from '../../middlewares/validate';
 import { notFound } from '../../lib/http-error';
 import { canSeeMedia } from '../../services/access';
 import { storage } from '../../services/storage';
+import { blogImageKey } from '../../services/blog-images';
 
 const recordingFile = z.object({ id: z.uuid(), file: z.enum(['preview.mp4', 'poster.jpg']) });
 const thumbFile = z.object({ id: z.uuid(), file: z.string().regex(/^[a-z0-9_-]+\.jpg$/i) });
 const stillFile = z.object({ id: z.uuid() });
+const blogFile = z.object({ id: z.uuid(), file: z.string().regex(/^[a-z0-9_-]+\.jpg$/i) });
 
 /** Streams a stored file; sendFile answers Range requests with 206 so video seeking works. */
 function send(res: Response, key: string, type: string) {
@@ -48,6 +50,14 @@ export function mediaRouter() {
     const still = await Still.findByPk(req.params.id as string, { include: [{ model: Recording, as: 'recording', attributes: ['tutorialId'] }] });
     if (!still || !(await canSeeMedia(req, still.recording!.tutorialId))) throw notFound('File');
     send(res, still.fileKey, 'image/jpeg');
+  });
+
+  // Resized stills for blog HTML pasted elsewhere; made by the HTML export, public once published.
+  r.get('/blog/:id/:file', validate({ params: blogFile }), async (req, res) => {
+    if (!(await canSeeMedia(req, req.params.id as string))) throw notFound('File');
+    const key = blogImageKey(req.params.id as string, req.params.file as string);
+    if (!(await storage.exists(key))) throw notFound('File');
+    send(res, key, 'image/jpeg');
   });
 
   return r;

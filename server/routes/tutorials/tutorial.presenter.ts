@@ -15,6 +15,7 @@ export function presentTutorial(t: Tutorial, abilities: TutorialAbilities) {
     precision: t.precision,
     defaultUnit: t.defaultUnit,
     publishedAt: t.publishedAt,
+    videoUrl: t.videoUrl,
     createdAt: t.createdAt,
     updatedAt: t.updatedAt,
     abilities,

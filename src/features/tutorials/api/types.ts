@@ -14,6 +14,7 @@ export type Tutorial = {
   precision: 8 | 16 | 32;
   defaultUnit: 'in' | 'mm' | 'cm';
   publishedAt: string | null;
+  videoUrl: string | null;
   createdAt: string;
   updatedAt: string;
   abilities: TutorialAbilities;
