@@ -138,7 +138,8 @@ function labelParts(p: Piece, precision: RulerPrecision, copies: 'one' | 'quanti
 function labelChoices(parts: [string, string, string], width: number): string[][] {
   const [name, a, b] = parts;
   const choices = [[`${name} ${a} · ${b}`], [name, `${a} · ${b}`], [name, a, b]];
-  return choices.filter((c) => c.every((l) => textWidthIn(l) <= width));
+  // The first line (the name) is set in the bold face.
+  return choices.filter((c) => c.every((l, i) => textWidthIn(l, i === 0) <= width));
 }
 
 function drawnLines(p: Piece, turned: boolean): DrawnLine[] {
@@ -207,7 +208,7 @@ function prepare(p: Piece, index: number, turned: boolean, precision: RulerPreci
     // Under the piece, at least 1 1/2 in wide so short pieces still get readable lines.
     const width = Math.max(num(w), 1.5);
     label = labelChoices(parts, width)[0] ?? parts.flatMap((part) => wrapWords(part, width));
-    const widest = Math.max(...label.map((l) => textWidthIn(l)));
+    const widest = Math.max(...label.map((l, i) => textWidthIn(l, i === 0)));
     // Round the label's width up to 1/16 in so the box stays on the planner's exact grid.
     const labelW = new Fraction(Math.ceil(widest * 16), 16);
     boxW = maxF(w, labelW).add(GAP);

@@ -16,7 +16,7 @@ import { RecordingUpload } from './recording-upload';
  * progress while it prepares the newest one, and the player with transcript, chapters and stills
  * once it is ready.
  */
-export function FootageSection({ tutorialId, canEdit }: { tutorialId: string; canEdit: boolean }) {
+export function FootageSection({ tutorialId, canEdit, startMs }: { tutorialId: string; canEdit: boolean; startMs?: number }) {
   const list = useRecordings(tutorialId);
   const upload = useRecordingUpload(tutorialId);
   if (list.isPending) return <Loading label="Loading the footage" />;
@@ -45,15 +45,15 @@ export function FootageSection({ tutorialId, canEdit }: { tutorialId: string; ca
       </section>
     );
   }
-  return <RecordingView key={newest.id} listed={newest} canEdit={canEdit} />;
+  return <RecordingView key={newest.id} listed={newest} canEdit={canEdit} startMs={startMs} />;
 }
 
-function RecordingView({ listed, canEdit: tutorialCanEdit }: { listed: Recording; canEdit: boolean }) {
+function RecordingView({ listed, canEdit: tutorialCanEdit, startMs }: { listed: Recording; canEdit: boolean; startMs?: number }) {
   const q = useQuery({ ...recordingQueryOptions(listed.id), placeholderData: listed });
   if (q.error) return <Notice kind="error">{q.error.message}</Notice>;
   const recording = q.data ?? listed;
   const canEdit = recording.abilities?.update ?? tutorialCanEdit;
   if (recording.status === 'failed') return <FailedPanel recording={recording} canEdit={canEdit} />;
   if (recording.status !== 'ready' || !recording.previewUrl) return <ProcessingPanel recording={recording} canEdit={canEdit} />;
-  return <FootageWorkspace recording={recording} canEdit={canEdit} />;
+  return <FootageWorkspace recording={recording} canEdit={canEdit} startMs={startMs} />;
 }

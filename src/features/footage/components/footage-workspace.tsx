@@ -22,8 +22,13 @@ type Message = { kind: 'success' | 'error' | 'info'; text: string };
  * A ready recording: the player with its scrub strip and stills on the left, the transcript and
  * chapters on the right, and the page's keys. Marking and pulling take the exact playhead.
  */
-export function FootageWorkspace({ recording, canEdit }: { recording: Recording; canEdit: boolean }) {
+export function FootageWorkspace({ recording, canEdit, startMs }: { recording: Recording; canEdit: boolean; startMs?: number }) {
   const player = usePlayer(recording.durationMs);
+  const { seek } = player;
+  // Opened from a link with a time: put the playhead there once.
+  useEffect(() => {
+    if (startMs !== undefined) seek(startMs);
+  }, [startMs, seek]);
   const chapters = useChapters(recording.id);
   const createChapter = useCreateChapter(recording.id);
   const createStill = useCreateStill(recording.id);
