@@ -13,7 +13,7 @@ const WHO: Who[] = ['owner', 'coordinator', 'maker', 'student', 'outsider', 'ano
 
 type Route = {
   name: string;
-  method: 'get' | 'post' | 'patch' | 'delete';
+  method: 'get' | 'post' | 'patch' | 'put' | 'delete';
   path: (f: StudioFixture, t: Tutorial) => string;
   body?: (f: StudioFixture) => object;
   expect: Record<Who, number>;
@@ -32,6 +32,20 @@ const ROUTES: Route[] = [
   { name: 'read draft tutorial', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
   { name: 'rename tutorial', method: 'patch', path: (_f, t) => `/api/tutorials/${t.id}`, body: () => ({ title: 'Renamed tutorial' }), expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
   { name: 'delete tutorial', method: 'delete', path: (_f, t) => `/api/tutorials/${t.id}`, fresh: true, expect: { owner: 204, coordinator: 403, maker: 204, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'list recordings', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/recordings`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'list pieces', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/pieces`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'add a piece', method: 'post', path: (_f, t) => `/api/tutorials/${t.id}/pieces`, body: () => ({ name: 'Mat', width: '4', height: '5 1/4' }), expect: { owner: 201, coordinator: 201, maker: 201, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'list mentions', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/mentions`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'sheet plan', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/sheet-plan?kits=2`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'add a material', method: 'post', path: (_f, t) => `/api/tutorials/${t.id}/materials`, fresh: true, body: () => ({ name: 'vellum', sheetWidth: '8 1/2', sheetHeight: '11' }), expect: { owner: 201, coordinator: 201, maker: 201, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'list supplies', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/supplies`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'add a supply', method: 'post', path: (_f, t) => `/api/tutorials/${t.id}/supplies`, body: () => ({ category: 'tool', name: 'Bone folder' }), expect: { owner: 201, coordinator: 201, maker: 201, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'read the write-up', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/article`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'save the write-up', method: 'put', path: (_f, t) => `/api/tutorials/${t.id}/article`, fresh: true, body: () => ({ version: 0, doc: { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Hello' }] }] } }), expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'list revisions', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/revisions`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'draft (no footage yet)', method: 'post', path: (_f, t) => `/api/tutorials/${t.id}/draft`, expect: { owner: 409, coordinator: 409, maker: 409, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'send for review', method: 'post', path: (_f, t) => `/api/tutorials/${t.id}/state`, fresh: true, body: () => ({ action: 'submit' }), expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 401 } },
+  { name: 'export a draft’s description', method: 'get', path: (_f, t) => `/api/tutorials/${t.id}/export/description.txt`, expect: { owner: 200, coordinator: 200, maker: 200, student: 403, outsider: 404, anonymous: 404 } },
   { name: 'read outbox', method: 'get', path: () => '/api/outbox', expect: { owner: 200, coordinator: 403, maker: 403, student: 403, outsider: 200, anonymous: 401 } },
 ];
 
