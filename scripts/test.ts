@@ -28,9 +28,7 @@ Object.assign(process.env, appEnv('test', 3999), {
 });
 {
   const { migrate } = await import('../server/services/database');
-  const { sequelize } = await import('../server/models');
   await migrate();
-  await sequelize.close();
 }
 
 const vitest = path.join(PROJECT_ROOT, 'node_modules/vitest/vitest.mjs');

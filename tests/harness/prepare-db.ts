@@ -16,7 +16,5 @@ export async function prepareTestDatabase(): Promise<void> {
   // Test uploads never land in the development media folder.
   process.env.MEDIA_DIR ??= mkdtempSync(path.join(os.tmpdir(), 'cardwright-test-media-'));
   const { migrate } = await import('../../server/services/database');
-  const { sequelize } = await import('../../server/models');
   await migrate();
-  await sequelize.close();
 }

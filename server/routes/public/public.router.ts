@@ -84,7 +84,7 @@ ${tutorial.videoUrl ? `<a href="${escapeHtml(tutorial.videoUrl)}" rel="noopener"
     if (!found) return notFoundPage(res);
     const { paper } = paperQuery.parse(req.query);
     const here = `/t/${found.studio.slug}/${found.tutorial.slug}`;
-    res.type('html').send(await printViewHtml(await loadPublishBundle(found.tutorial), { paper, back: here, pdfHref: `/api/tutorials/${found.tutorial.id}/export/handout.pdf?paper=${paper}` }));
+    res.type('html').send(await printViewHtml(await loadPublishBundle(found.tutorial), { paper, back: here, pdfHref: `/api/tutorials/${found.tutorial.id}/export/handout.pdf?paper=${paper}`, tutorialId: found.tutorial.id }));
   });
 
   // The print view of a tutorial that may not be published yet, for the people working on it.
@@ -99,7 +99,7 @@ ${tutorial.videoUrl ? `<a href="${escapeHtml(tutorial.videoUrl)}" rel="noopener"
       throw e;
     }
     const { paper } = paperQuery.parse(req.query);
-    res.type('html').send(await printViewHtml(await loadPublishBundle(tutorial), { paper, back: `/tutorials/${tutorial.id}/publish`, pdfHref: `/api/tutorials/${tutorial.id}/export/handout.pdf?paper=${paper}` }));
+    res.type('html').send(await printViewHtml(await loadPublishBundle(tutorial), { paper, back: `/tutorials/${tutorial.id}/publish`, pdfHref: `/api/tutorials/${tutorial.id}/export/handout.pdf?paper=${paper}`, tutorialId: tutorial.id }));
   });
 
   return r;

@@ -1,6 +1,17 @@
 import type { TutorialState } from '@shared/schemas/tutorial';
 
-export type TutorialAbilities = { read: boolean; update: boolean; delete: boolean; submit: boolean; review: boolean; publish: boolean; comment: boolean };
+export type TutorialAbilities = {
+  read: boolean;
+  update: boolean;
+  delete: boolean;
+  submit: boolean;
+  review: boolean;
+  approve: boolean;
+  sendBack: boolean;
+  publish: boolean;
+  unpublish: boolean;
+  comment: boolean;
+};
 
 export type Tutorial = {
   id: string;
