@@ -45,7 +45,7 @@ export const router = createBrowserRouter([
           { path: 'footage', lazy: async () => ({ Component: (await import('./routes/footage')).FootageRoute }) },
           { path: 'cut-list', lazy: async () => ({ Component: (await import('./routes/cut-list')).CutListRoute }) },
           { path: 'supplies', lazy: async () => ({ Component: (await import('./routes/supplies')).SuppliesRoute }) },
-          { path: 'write-up', element: <SectionPlaceholder section="write-up" /> },
+          { path: 'write-up', lazy: async () => ({ Component: (await import('./routes/write-up')).WriteUpRoute }) },
           { path: 'publish', lazy: async () => ({ Component: (await import('./routes/publish')).PublishRoute }) },
         ],
       },

@@ -1,0 +1,11 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { api } from '@/lib/api-client';
+import { writeUpKeys } from './keys';
+import type { RevisionDetail } from './types';
+
+/** One revision with its document. Revisions never change, so it is cached for as long as the page lives. */
+export const getRevision = (revisionId: string) => api<RevisionDetail>(`/revisions/${revisionId}`);
+export const revisionQueryOptions = (revisionId: string) =>
+  queryOptions({ queryKey: writeUpKeys.revision(revisionId), queryFn: () => getRevision(revisionId), staleTime: Infinity });
+export const useRevision = (revisionId: string | null) =>
+  useQuery({ ...revisionQueryOptions(revisionId ?? ''), enabled: revisionId !== null });
