@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import bcrypt from 'bcryptjs';
 import { OutboxMessage, User } from '@server/models';
+import { lastMailTo } from '../../../tests/harness/mail';
 import { testApp } from '../../../tests/harness/app';
 import { TestClient } from '../../../tests/harness/client';
 import { makeUser, TEST_PASSWORD } from '../../../tests/harness/factories';
@@ -9,14 +10,6 @@ import { createApp } from '@server/app';
 const app = testApp();
 const email = () => `${crypto.randomUUID()}@test.example`;
 
-async function lastMailTo(address: string) {
-  for (let i = 0; i < 50; i++) {
-    const m = await OutboxMessage.findOne({ where: { to: address }, order: [['createdAt', 'DESC']] });
-    if (m) return m;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail to ${address}`);
-}
 
 describe('CSRF (OWASP CSRF Prevention: token on state-changing requests)', () => {
   it('refuses a state change without the X-CSRF-Token header with 403', async () => {

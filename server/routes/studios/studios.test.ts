@@ -1,19 +1,11 @@
 import { describe, expect, it } from 'vitest';
-import { Membership, OutboxMessage } from '@server/models';
+import { Membership } from '@server/models';
+import { lastMailTo } from '../../../tests/harness/mail';
 import { testApp } from '../../../tests/harness/app';
 import { makeStudio } from '../../../tests/harness/factories';
 import { TestClient } from '../../../tests/harness/client';
 
 const app = testApp();
-
-async function mailTo(address: string) {
-  for (let i = 0; i < 50; i++) {
-    const m = await OutboxMessage.findOne({ where: { to: address } });
-    if (m) return m;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error('no mail');
-}
 
 describe('invitations', () => {
   it('400 for a bad role or e-mail; 409 for someone already a member', async () => {
@@ -27,7 +19,7 @@ describe('invitations', () => {
     const owner = await f.clientFor('owner');
     const email = `${crypto.randomUUID()}@test.example`;
     expect((await owner.post(`/api/studios/${f.studio.id}/invitations`, { email, role: 'coordinator' })).status).toBe(201);
-    const token = (await mailTo(email)).text.match(/\/invite\/([\w-]+)/)![1];
+    const token = (await lastMailTo(email)).text.match(/\/invite\/([\w-]+)/)![1];
     const guest = new TestClient(app);
     const preview = await guest.get(`/api/invitations/${token}`);
     expect(preview.body).toMatchObject({ email, role: 'coordinator', hasAccount: false, studio: { id: f.studio.id } });
@@ -40,7 +32,7 @@ describe('invitations', () => {
     const f = await makeStudio(app);
     const owner = await f.clientFor('owner');
     await owner.post(`/api/studios/${f.studio.id}/invitations`, { email: f.outsider.email, role: 'maker' });
-    const token = (await mailTo(f.outsider.email)).text.match(/\/invite\/([\w-]+)/)![1];
+    const token = (await lastMailTo(f.outsider.email)).text.match(/\/invite\/([\w-]+)/)![1];
     const outsider = await f.clientFor('outsider');
     const res = await outsider.post('/api/invitations/accept', { token });
     expect(res.status).toBe(200);
