@@ -38,7 +38,8 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
       contentSecurityPolicy: {
         directives: {
           defaultSrc: ["'self'"],
-          imgSrc: ["'self'", 'data:', 'blob:'],
+          // https: lets a write-up show a photo pasted from the web while it is being edited.
+          imgSrc: ["'self'", 'data:', 'blob:', 'https:'],
           mediaSrc: ["'self'", 'blob:'],
           styleSrc: ["'self'", "'unsafe-inline'"],
           fontSrc: ["'self'", 'data:'],
@@ -76,7 +77,7 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   // Exports first: a published tutorial's exports are open to visitors who are not signed in.
   api.use('/tutorials', exportsRouter());
   api.use('/tutorials', tutorialsRouter());
-  api.use('/tutorials', tutorialRecordingsRouter());
+  api.use('/tutorials', tutorialRecordingsRouter({ maxUploadBytes: config.maxUploadBytes }));
   api.use(recordingsRouter());
   api.use(piecesRouter());
   api.use(suppliesRouter());

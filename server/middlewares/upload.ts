@@ -7,7 +7,8 @@ import multer from 'multer';
 import { config } from '../config';
 import { HttpError } from '../lib/http-error';
 
-const formatBytes = (n: number) => (n >= 1024 ** 3 ? `${(n / 1024 ** 3).toFixed(n % 1024 ** 3 ? 1 : 0)} GB` : `${Math.round(n / 1024 ** 2)} MB`);
+const formatBytes = (n: number) =>
+  n >= 1024 ** 3 ? `${(n / 1024 ** 3).toFixed(n % 1024 ** 3 ? 1 : 0)} GB` : n >= 1024 ** 2 ? `${Math.round(n / 1024 ** 2)} MB` : `${Math.max(1, Math.round(n / 1024))} KB`;
 
 /**
  * One file in multipart field `file`, streamed to a generated name in the media scratch folder

@@ -22,7 +22,7 @@ import { presentChapter, presentRecording, presentStill } from './recording.pres
 const TRANSCRIPT_MAX_BYTES = 5 * 1024 * 1024;
 
 /** Upload and list recordings of a tutorial: mounted at /api/tutorials. */
-export function tutorialRecordingsRouter() {
+export function tutorialRecordingsRouter(opts: { maxUploadBytes?: number } = {}) {
   const r = Router();
   r.use(requireUser);
 
@@ -42,7 +42,7 @@ export function tutorialRecordingsRouter() {
       authorize(abilities, 'update', 'Only people who can edit this tutorial can upload footage');
       next();
     },
-    singleUpload({ what: 'recording' }),
+    singleUpload({ what: 'recording', maxBytes: opts.maxUploadBytes }),
     async (req, res) => {
       const file = req.file!;
       const type = await fileTypeFromFile(file.path).catch(() => undefined);

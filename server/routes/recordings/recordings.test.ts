@@ -7,8 +7,10 @@ import { config } from '@server/config';
 import { processRecording } from '@server/jobs/process-recording';
 import { startWorkers, stopQueue } from '@server/jobs';
 import { colourSteps, nearestStep, pixelAt, tempDir } from '@server/services/media/test-clips';
+import { createApp } from '@server/app';
 import { testApp } from '../../../tests/harness/app';
-import { makeStudio, type StudioFixture } from '../../../tests/harness/factories';
+import { TestClient } from '../../../tests/harness/client';
+import { makeStudio, TEST_PASSWORD, type StudioFixture } from '../../../tests/harness/factories';
 
 const app = testApp();
 let dir: string;
@@ -112,6 +114,20 @@ describe('POST /api/tutorials/:id/recordings', () => {
     expect(during, 'the partial upload was being written').toBe(1);
     expect(tmpFiles()).toEqual([]);
     expect(await Recording.count({ where: { tutorialId: f.tutorial.id } })).toBe(before);
+  });
+
+  it('refuses a file over the size limit with 413 and keeps nothing (OWASP File Upload: size limit)', async () => {
+    const small = createApp({ config: { maxUploadBytes: 1000 }, rateLimit: { signIn: 10_000 } });
+    const c = new TestClient(small);
+    await c.signIn(f.users.maker.email, TEST_PASSWORD);
+    const before = await Recording.count({ where: { tutorialId: f.tutorial.id } });
+    const res = await c.upload(`/api/tutorials/${f.tutorial.id}/recordings`, 'file', clip, 'steps.mp4');
+    expect(res.status).toBe(413);
+    expect(res.body.error).toBe('The recording is larger than the 1 KB limit');
+    expect(await Recording.count({ where: { tutorialId: f.tutorial.id } })).toBe(before);
+    for (let i = 0; i < 20 && tmpFiles().length > 0; i++) await new Promise((r) => setTimeout(r, 100));
+    expect(tmpFiles()).toEqual([]);
+    await small.close();
   });
 
   it('a truncated file fails processing with a readable reason', async () => {
