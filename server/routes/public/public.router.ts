@@ -34,13 +34,14 @@ body{margin:0;background:#FBF8F3;color:#22303C;font-family:Merriweather,Georgia,
 header.site{font-family:Inter,system-ui,sans-serif;display:flex;gap:1rem;align-items:center;justify-content:space-between;padding:.8rem 1.2rem;border-bottom:1px solid #E6DFD3;background:#fff}
 header.site a{color:#22303C;text-decoration:none}.brand{font-family:Merriweather,Georgia,serif;font-weight:700}
 .wrap{display:grid;grid-template-columns:minmax(0,1fr) 16rem;gap:2.5rem;max-width:66rem;margin:0 auto;padding:2rem 1.2rem}
-@media (max-width:52rem){.wrap{grid-template-columns:1fr}}
+@media (max-width:52rem){.wrap{grid-template-columns:minmax(0,1fr)}}
 article img{max-width:100%;height:auto;border-radius:6px}figure{margin:1.2rem 0}figcaption{font-size:.85em;color:#8A8F98}
 table{border-collapse:collapse;width:100%;font-size:.9em}th,td{border-bottom:1px solid #E6DFD3;text-align:left;padding:.35rem .5rem;vertical-align:top}
 h2{border-bottom:1.5px dashed #A87B4F;padding-bottom:.2rem}aside{border-left:3px solid #6E8B74;padding:.1rem 1rem;margin:1rem 0;background:#fff}aside.cw-caution{border-color:#B5475B}
 a{color:#8C6440}.actions{font-family:Inter,system-ui,sans-serif;font-size:.9rem;position:sticky;top:1rem;align-self:start;background:#fff;border:1px solid #E6DFD3;border-radius:10px;padding:1rem}
 .actions h2{font-family:Merriweather,Georgia,serif;font-size:1rem;border:0;margin:.2rem 0 .6rem}.actions a,.actions button{display:block;width:100%;box-sizing:border-box;margin:.35rem 0;padding:.45rem .7rem;border:1px solid #E6DFD3;border-radius:6px;background:#fff;color:#22303C;text-decoration:none;font:inherit;text-align:left;cursor:pointer}
 .actions button{background:#A87B4F;color:#fff;border-color:#A87B4F}.actions p{color:#8A8F98;font-size:.8rem}
+@media (max-width:40rem){table{display:block;overflow-x:auto;font-size:.85em}th,td{white-space:nowrap}}
 @media print{header.site,.actions{display:none}.wrap{display:block;padding:0}}`;
 
 /** Public pages (/t/:studio/:tutorial), print views, and the static files they use. */
