@@ -18,12 +18,14 @@ describe('fillers', () => {
     ['fold it like I said along the score', 'Fold it along the score.'],
     ['okay so now we glue the tab', 'Now we glue the tab.'],
     ['hmm, the strip is ten millimetres wide', 'The strip is 10 mm wide.'],
+    ['leave a bit extra, like, for the overlap', 'Leave a bit extra for the overlap.'],
   ])('%j', (spoken, written) => expect(cleanSpokenText(spoken)).toBe(written));
 
   it('keeps "you know" when it means something, and never eats "mm" (millimetres)', () => {
     expect(cleanSpokenText('do you know how to score a card')).toBe('Do you know how to score a card.');
     expect(cleanSpokenText('you know how a gatefold opens')).toBe('You know how a gatefold opens.');
     expect(cleanSpokenText('the tab is 12 mm')).toBe('The tab is 12 mm.');
+    expect(cleanSpokenText('fold it like this')).toBe('Fold it like this.');
   });
 });
 

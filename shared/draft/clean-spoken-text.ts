@@ -24,6 +24,8 @@ const PHRASE_FILLERS: RegExp[] = [
   /(?:,\s*)?(?<![\w'])(?:like|as) I said(?![\w'])[,;]?/gi,
   /(?<![\w'])(?:okay|ok|alright|all right)\s*,?\s+so(?![\w'])[,;]?/gi,
   /(?<![\w'])(?:so yeah|yeah so)(?![\w'])[,;]?/gi,
+  // "like" set off by commas is a filler ("a bit extra, like, for the overlap"); "cut it like this" is not.
+  /,\s*like\s*,/gi,
 ];
 // "you know" is a filler unless it asks or tells something ("do you know", "you know how").
 const YOU_KNOW = /(?:,\s*)?(?<![\w'])you know(?![\w'])[,;]?/gi;
