@@ -7,6 +7,9 @@ import { startWorkers, stopQueue } from './jobs';
 /** Boots the database connection and the HTTP server; resolves once it listens. */
 export async function startServer(opts: { port?: number } = {}): Promise<{ server: Server; stop: () => Promise<void> }> {
   await sequelize.authenticate();
+  if (config.env === 'production' && !process.env.SESSION_SECRET) {
+    console.warn('SESSION_SECRET is not set: sessions are signed with the development secret. Set it before serving real people.');
+  }
   const app = createApp();
   const server = createServer(app);
   server.requestTimeout = 0; // multi-GB uploads take longer than Node's default five minutes
