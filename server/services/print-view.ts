@@ -20,7 +20,12 @@ export async function printViewHtml(bundle: PublishBundle, opts: { paper: Paper;
   // them, steps with their photos; the handout adds the QR code and the safety notes.
   const blog = await blogHtml(bundle, { imageBase: `/media/blog/${opts.tutorialId}/` });
   await ensureBlogImages(opts.tutorialId, blog.images);
-  const article = blog.html.replace(/<script type="application\/ld\+json">[\s\S]*?<\/script>/, '');
+  const cover = bundle.stills[0];
+  const coverHtml = cover
+    ? `<figure class="cover"><img src="/media/stills/${escapeHtml(cover.id)}.jpg" alt="${escapeHtml(cover.alt || cover.caption || tutorial.title)}" width="${cover.width}" height="${cover.height}"></figure>`
+    : '';
+  // The cover photo goes before the first section, as on the PDF handout.
+  const article = blog.html.replace(/<script type="application\/ld\+json">[\s\S]*?<\/script>/, '').replace(/<h2/, `${coverHtml}<h2`);
   const notes = safetyNotes(detectHazards(bundle));
   return `<!DOCTYPE html>
 <html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1">
@@ -33,15 +38,16 @@ main { max-width: 180mm; margin: 0 auto; padding: 10mm 0; position: relative; }
 .bar { font-family: Inter, system-ui, sans-serif; display: flex; gap: 10px; align-items: center; padding: 10px 14px; background: #fff; border-bottom: 1px solid #E6DFD3; }
 .bar a, .bar button { font: inherit; font-size: 13px; color: #22303C; background: #fff; border: 1px solid #E6DFD3; border-radius: 6px; padding: 5px 10px; text-decoration: none; cursor: pointer; }
 .bar button { background: #A87B4F; color: #fff; border-color: #A87B4F; }
-h1 { font-size: 20pt; margin: 0 0 2mm; padding-right: 36mm; } h2 { font-size: 13pt; margin: 6mm 0 2mm; border-bottom: 1.5px dashed #A87B4F; padding-bottom: 1mm; }
+h1 { font-size: 20pt; margin: 0 0 2mm; } h2 { clear: both; font-size: 13pt; margin: 6mm 0 2mm; border-bottom: 1.5px dashed #A87B4F; padding-bottom: 1mm; }
 .cw-byline { font-family: Inter, system-ui, sans-serif; color: #8A8F98; font-size: 9pt; margin: 0 0 4mm; }
-.qr { position: absolute; top: 10mm; right: 0; font-family: Inter, system-ui, sans-serif; font-size: 7.5pt; color: #8A8F98; text-align: center; width: 30mm; } .qr img { width: 30mm; height: 30mm; display: block; }
+/* Floated so the title wraps beside it and the first section starts below it. */
+.qr { float: right; margin: 0 0 3mm 6mm; font-family: Inter, system-ui, sans-serif; font-size: 7.5pt; color: #8A8F98; text-align: center; width: 30mm; } .qr img { width: 30mm; height: 30mm; display: block; }
 table { border-collapse: collapse; width: 100%; font-size: 9pt; } th, td { border-bottom: 1px solid #E6DFD3; text-align: left; padding: 1.2mm 1.5mm; vertical-align: top; }
-figure { margin: 2mm 0; } figure img { max-width: 60mm; height: auto; border-radius: 1.5mm; } figcaption { font-size: 8.5pt; color: #8A8F98; }
+figure { margin: 2mm 0; } figure.cover img { max-width: 100%; width: 120mm; } figure img { max-width: 60mm; height: auto; border-radius: 1.5mm; } figcaption { font-size: 8.5pt; color: #8A8F98; }
 ol > li { break-inside: avoid; page-break-inside: avoid; }
 aside { border-left: 3px solid #6E8B74; padding: 0 4mm; margin: 3mm 0; break-inside: avoid; } aside.cw-caution { border-color: #B5475B; }
 .safety { border: 1px solid #B5475B; border-radius: 2mm; padding: 2mm 4mm; font-size: 9pt; break-inside: avoid; }
-@media print { .bar { display: none; } body { background: #fff; } main { padding: 0; max-width: none; } .qr { top: 0; } }
+@media print { .bar { display: none; } body { background: #fff; } main { padding: 0; max-width: none; } }
 </style></head><body>
 <nav class="bar" aria-label="Print view"><a href="${escapeHtml(opts.back)}">Back</a><button type="button" data-print>Print</button><a href="${escapeHtml(opts.pdfHref)}">Download PDF</a><span style="color:#8A8F98">Paper: ${opts.paper === 'a4' ? 'A4' : 'Letter'}</span></nav>
 <main>
