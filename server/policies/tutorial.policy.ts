@@ -16,7 +16,6 @@ export function tutorialAbilities(actor: Actor, t: TutorialLike) {
     update: staff || author,
     delete: r === 'owner' || (author && t.state !== 'published'),
     submit: (staff || author) && (t.state === 'draft' || t.state === 'needs_changes'),
-    review: staff && t.state === 'in_review',
     approve: staff && t.state === 'in_review',
     sendBack: staff && (t.state === 'in_review' || t.state === 'approved'),
     publish: staff && t.state === 'approved',

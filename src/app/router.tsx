@@ -12,7 +12,6 @@ import { StudioHomeRoute } from './routes/studio-home';
 import { MembersRoute } from './routes/members';
 import { OutboxRoute } from './routes/outbox';
 import { TutorialLayoutRoute } from './routes/tutorial-layout';
-import { SectionPlaceholder } from './routes/section-placeholder';
 import { NotFoundRoute } from './routes/not-found';
 
 /** Signed-out pages bounce signed-in people home. */

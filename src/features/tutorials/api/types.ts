@@ -5,7 +5,6 @@ export type TutorialAbilities = {
   update: boolean;
   delete: boolean;
   submit: boolean;
-  review: boolean;
   approve: boolean;
   sendBack: boolean;
   publish: boolean;
