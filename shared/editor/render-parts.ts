@@ -14,6 +14,7 @@ export const CATEGORY_LABELS: Record<string, string> = {
   embellishment: 'Embellishments',
   adhesive: 'Adhesives',
   tool: 'Tools',
+  other: 'Other',
 };
 
 /** Used when a supply link is sponsored and the caller gave no wording of its own (one wording app-wide). */

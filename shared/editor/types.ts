@@ -4,6 +4,8 @@
  * and Supplies sections when a document is rendered, so an edit there shows up everywhere.
  */
 
+import { SUPPLY_CATEGORIES } from '../schemas/supply';
+
 /** Names of the nodes this project adds to the Tiptap schema. */
 export const ARTICLE_NODE_NAMES = ['step', 'stepTitle', 'still', 'cutList', 'supplyList', 'tip', 'caution'] as const;
 export type ArticleNodeName = (typeof ARTICLE_NODE_NAMES)[number];
@@ -61,7 +63,7 @@ export interface RenderPiece {
 }
 
 /** Supply categories in the order a supplies list shows them (DESIGN.md W4). */
-export const SUPPLY_CATEGORIES = ['paper', 'cardstock', 'embellishment', 'adhesive', 'tool'] as const;
+export { SUPPLY_CATEGORIES };
 export type SupplyCategory = (typeof SUPPLY_CATEGORIES)[number];
 
 /** One supply as a renderer receives it. */
