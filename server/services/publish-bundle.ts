@@ -4,7 +4,7 @@ import { config } from '../config';
 import type { PublishBundle } from './publish/types';
 import { loadCutList } from './cut-list';
 import { getArticle } from './write-up';
-import { loadSupplies } from '../routes/supplies/supplies.router';
+import { loadSupplies } from './supplies';
 import { storage } from './storage';
 
 /** The stable public address of a published tutorial. */

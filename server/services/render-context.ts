@@ -2,7 +2,7 @@ import type { RenderContext } from '@shared/editor';
 import type { RulerPrecision } from '@shared/measure';
 import type { Tutorial } from '../models';
 import { loadCutList } from './cut-list';
-import { loadSupplies } from '../routes/supplies/supplies.router';
+import { loadSupplies } from './supplies';
 import { toRenderPieces, toRenderSupplies } from './publish/render-inputs';
 
 /** The cut list and supplies as the write-up's live nodes show them, in the crafter's words. */

@@ -1,34 +1,13 @@
 import { Router } from 'express';
 import { idParams } from '@shared/schemas/studio';
-import { createSupplySchema, DEFAULT_DISCLOSURE, disclosureSchema, updateSupplySchema } from '@shared/schemas/supply';
-import { Supply, type Tutorial } from '../../models';
+import { createSupplySchema, disclosureSchema, updateSupplySchema } from '@shared/schemas/supply';
+import { Supply } from '../../models';
+import { loadSupplies, presentSupply } from '../../services/supplies';
 import { validate } from '../../middlewares/validate';
 import { requireUser } from '../../middlewares/authenticate';
 import { authorize } from '../../policies';
 import { notFound } from '../../lib/http-error';
 import { loadTutorial } from '../../services/access';
-
-export const presentSupply = (s: Supply) => ({
-  id: s.id,
-  position: s.position,
-  category: s.category,
-  name: s.name,
-  quantity: s.quantity,
-  note: s.note,
-  url: s.url,
-  sponsored: s.sponsored,
-  discountCode: s.discountCode,
-});
-
-/** The supplies and, when any link is sponsored, the disclosure that goes with them. */
-export async function loadSupplies(tutorial: Tutorial) {
-  const rows = await Supply.findAll({ where: { tutorialId: tutorial.id }, order: [['position', 'ASC'], ['createdAt', 'ASC']] });
-  const sponsored = rows.some((s) => s.sponsored && s.url);
-  return {
-    supplies: rows.map(presentSupply),
-    disclosure: { required: sponsored, text: tutorial.disclosure ?? DEFAULT_DISCLOSURE, custom: tutorial.disclosure !== null },
-  };
-}
 
 /** Supplies CRUD under /api. */
 export function suppliesRouter() {
