@@ -1,16 +1,12 @@
-import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
-import { ApiError } from '@/lib/api-client';
+import { useId, type ReactNode } from 'react';
+import { useInlineEdit } from '@/components/ui/use-inline-edit';
 import { readTyped } from '../utils/lengths';
 import { useCutList } from './cut-list-context';
 import { LengthPreview } from './length-text';
 
 type Kind = 'text' | 'number' | 'length';
 
-/** A server refusal in words: the field's own issue when there is one, else the message. */
-export function saveErrorText(e: unknown): string {
-  if (e instanceof ApiError) return e.issues[0]?.message ? `${e.issues[0].message}` : e.message;
-  return 'Could not save; please try again.';
-}
+export { saveErrorText } from '@/components/ui/use-inline-edit';
 
 /**
  * A table cell that turns into a field when clicked. Enter or leaving the field saves, Escape
@@ -31,59 +27,22 @@ export function EditableCell(props: {
 }) {
   const { canEdit, defaultUnit, precision } = useCutList();
   const kind = props.kind ?? 'text';
-  const [editing, setEditing] = useState(false);
-  const [text, setText] = useState(props.initial);
-  const [error, setError] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-  const input = useRef<HTMLInputElement>(null);
-  const button = useRef<HTMLButtonElement>(null);
-  // Enter saves and the field then loses focus: one save, not two.
-  const settled = useRef(false);
   const hintId = useId();
-
-  useEffect(() => {
-    if (editing) input.current?.focus();
-  }, [editing]);
+  const edit = useInlineEdit({
+    value: props.initial,
+    onSave: props.onSave,
+    check: (text) => props.validate?.(text) ?? (kind === 'length' ? lengthProblem(text, defaultUnit, precision) : null),
+  });
+  const { editing, text, error, saving } = edit;
 
   if (!canEdit) return <div className={props.className}>{props.display}</div>;
-
-  const open = () => {
-    setText(props.initial);
-    setError(null);
-    settled.current = false;
-    setEditing(true);
-  };
-  const close = (refocus: boolean) => {
-    settled.current = true;
-    setEditing(false);
-    setError(null);
-    if (refocus) requestAnimationFrame(() => button.current?.focus());
-  };
-  const commit = async (refocus: boolean) => {
-    if (settled.current || saving) return;
-    if (text.trim() === props.initial.trim()) return close(refocus);
-    const local = props.validate?.(text) ?? (kind === 'length' ? lengthProblem(text, defaultUnit, precision) : null);
-    if (local) {
-      setError(local);
-      return;
-    }
-    setSaving(true);
-    try {
-      await props.onSave(text.trim());
-      close(refocus);
-    } catch (e) {
-      setError(saveErrorText(e));
-    } finally {
-      setSaving(false);
-    }
-  };
 
   if (!editing) {
     return (
       <button
-        ref={button}
+        ref={edit.buttonRef}
         type="button"
-        onClick={open}
+        onClick={edit.open}
         aria-label={`Edit ${props.label}`}
         className={`-mx-1 block w-[calc(100%+0.5rem)] rounded px-1 py-0.5 text-left hover:bg-kraft-light/60 focus-visible:bg-kraft-light/60 ${props.className ?? ''}`}
       >
@@ -95,7 +54,7 @@ export function EditableCell(props: {
   return (
     <div className="relative">
       <input
-        ref={input}
+        ref={edit.inputRef}
         aria-label={props.label}
         aria-invalid={error ? true : undefined}
         aria-describedby={hintId}
@@ -105,20 +64,9 @@ export function EditableCell(props: {
         placeholder={props.placeholder}
         list={props.list}
         readOnly={saving}
-        onChange={(e) => {
-          setText(e.target.value);
-          setError(null);
-        }}
-        onKeyDown={(e) => {
-          if (e.key === 'Enter') {
-            e.preventDefault();
-            void commit(true);
-          } else if (e.key === 'Escape') {
-            e.preventDefault();
-            close(true);
-          }
-        }}
-        onBlur={() => void commit(false)}
+        onChange={(e) => edit.setText(e.target.value)}
+        onKeyDown={edit.onKeyDown}
+        onBlur={edit.onBlur}
       />
       <div id={hintId} className="absolute left-0 top-full z-20 mt-0.5 w-64 empty:hidden">
         {(kind === 'length' && !error && text.trim() !== '') || saving || error ? (

@@ -1,11 +1,8 @@
-import { useEffect, useId, useRef, useState, type ReactNode } from 'react';
-import { ApiError } from '@/lib/api-client';
+import { useId, type ReactNode } from 'react';
+import { saveErrorText, useInlineEdit } from '@/components/ui/use-inline-edit';
 
 /** The server's reason for one field, else its message; the typed text stays in the field. */
-export function fieldError(e: unknown, field: string): string {
-  if (e instanceof ApiError) return e.issues.find((i) => i.path === field)?.message ?? e.issues[0]?.message ?? e.message;
-  return 'Could not save; please try again.';
-}
+export const fieldError = (e: unknown, field: string) => saveErrorText(e, field);
 
 type Props = {
   /** The supply field, to pick the server's issue for it. */
@@ -34,62 +31,17 @@ type Props = {
  * text and the reason beside it.
  */
 export function EditableCell({ field, label, value, display, canEdit, check, onSave, type = 'text', placeholder, maxLength, focusKey, editLabel }: Props) {
-  const [editing, setEditing] = useState(false);
-  const [text, setText] = useState(value);
-  const [error, setError] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-  const input = useRef<HTMLInputElement>(null);
-  const button = useRef<HTMLButtonElement>(null);
-  // Enter saves and then the field loses focus; Escape closes and then it loses focus: one outcome each.
-  const settled = useRef(false);
   const errorId = useId();
-
-  useEffect(() => {
-    if (editing) {
-      input.current?.focus();
-      input.current?.select();
-    }
-  }, [editing]);
+  const edit = useInlineEdit({ value, onSave, check, field, selectOnOpen: true });
+  const { editing, text, error, saving } = edit;
 
   if (!canEdit) return <>{display}</>;
-
-  const open = () => {
-    setText(value);
-    setError(null);
-    settled.current = false;
-    setEditing(true);
-  };
-  const close = (refocus: boolean) => {
-    settled.current = true;
-    setEditing(false);
-    setError(null);
-    if (refocus) requestAnimationFrame(() => button.current?.focus());
-  };
-  const save = async (refocus: boolean) => {
-    if (settled.current || saving) return;
-    if (text.trim() === value.trim()) return close(refocus);
-    const problem = check?.(text) ?? null;
-    if (problem) {
-      // The field stays open with what was typed and the reason; the focus is not pulled back.
-      setError(problem);
-      return;
-    }
-    setSaving(true);
-    try {
-      await onSave(text);
-      close(refocus);
-    } catch (e) {
-      setError(fieldError(e, field));
-    } finally {
-      setSaving(false);
-    }
-  };
 
   if (editing) {
     return (
       <div>
         <input
-          ref={input}
+          ref={edit.inputRef}
           type={type}
           value={text}
           aria-label={label}
@@ -97,18 +49,9 @@ export function EditableCell({ field, label, value, display, canEdit, check, onS
           aria-describedby={error ? errorId : undefined}
           placeholder={placeholder}
           maxLength={maxLength}
-          onChange={(e) => setText(e.target.value)}
-          onKeyDown={(e) => {
-            if (e.key === 'Enter') {
-              e.preventDefault();
-              void save(true);
-            } else if (e.key === 'Escape') {
-              e.preventDefault();
-              e.stopPropagation();
-              close(true);
-            }
-          }}
-          onBlur={() => void save(false)}
+          onChange={(e) => edit.setText(e.target.value)}
+          onKeyDown={edit.onKeyDown}
+          onBlur={edit.onBlur}
           aria-busy={saving || undefined}
           className={`w-full min-w-0 rounded border bg-white px-2 py-1 text-sm outline-none focus:border-kraft ${error ? 'border-rosehip' : 'border-kraft/60'}`}
         />
@@ -126,10 +69,10 @@ export function EditableCell({ field, label, value, display, canEdit, check, onS
       <div className="flex items-center gap-1">
         <div className="min-w-0 flex-1 truncate">{display}</div>
         <button
-          ref={button}
+          ref={edit.buttonRef}
           type="button"
           data-focus-key={focusKey}
-          onClick={open}
+          onClick={edit.open}
           aria-label={editLabel}
           className="shrink-0 rounded px-1.5 py-0.5 text-xs text-pencil hover:bg-kraft-light hover:text-kraft-dark"
         >
@@ -140,10 +83,10 @@ export function EditableCell({ field, label, value, display, canEdit, check, onS
   }
   return (
     <button
-      ref={button}
+      ref={edit.buttonRef}
       type="button"
       data-focus-key={focusKey}
-      onClick={open}
+      onClick={edit.open}
       aria-label={`${label}: ${value || 'none'}`}
       title="Click to edit"
       className="block w-full min-w-0 rounded px-2 py-1 text-left text-sm hover:bg-kraft-light"
