@@ -53,6 +53,16 @@ const presentCheck = (c: Check) => ({
 /** Default stock when a material has no row yet: 12 x 12 in, the usual scrapbook sheet (common practice). */
 const DEFAULT_STOCK = sheetSize('12x12')!;
 
+/**
+ * The stock sheet a material is cut from, found by name (any case); a material with no row yet
+ * gets the default 12 x 12 in sheet, pieces may turn.
+ */
+export function stockOf(materials: readonly Material[], name: string) {
+  const material = materials.find((m) => m.name.toLowerCase() === name.toLowerCase());
+  if (!material) return { material, width: DEFAULT_STOCK.width, height: DEFAULT_STOCK.height, rotate: true };
+  return { material, width: parseStoredLength(material.sheetWidth), height: parseStoredLength(material.sheetHeight), rotate: material.rotate };
+}
+
 /** The cut list with each piece's checks, in position order. */
 export async function loadCutList(tutorial: Tutorial) {
   const [rows, materials] = await Promise.all([
@@ -60,12 +70,8 @@ export async function loadCutList(tutorial: Tutorial) {
     Material.findAll({ where: { tutorialId: tutorial.id }, order: [['name', 'ASC']] }),
   ]);
   const pieces = rows.map(toPiece);
-  const byName = new Map(materials.map((m) => [m.name.toLowerCase(), m]));
-  const stockFor = (material: string) => {
-    const m = byName.get(material.toLowerCase());
-    if (!m) return material ? { width: DEFAULT_STOCK.width, height: DEFAULT_STOCK.height, rotate: true } : undefined;
-    return { width: parseStoredLength(m.sheetWidth), height: parseStoredLength(m.sheetHeight), rotate: m.rotate };
-  };
+  // A piece with no material has no stock sheet to be checked against.
+  const stockFor = (material: string) => (material ? stockOf(materials, material) : undefined);
   const checks = checkCutList(pieces, { precision: tutorial.precision as RulerPrecision, stockFor });
   return {
     rows,

@@ -25,13 +25,9 @@ function send(res: Response, key: string, type: string) {
  */
 export function mediaRouter() {
   const r = Router();
-  const load = async (id: string) => {
-    const rec = await Recording.findByPk(id);
-    return rec;
-  };
 
   r.get('/recordings/:id/:file', validate({ params: recordingFile }), async (req, res) => {
-    const rec = await load(req.params.id as string);
+    const rec = await Recording.findByPk(req.params.id as string);
     if (!rec || !(await canSeeMedia(req, rec.tutorialId))) throw notFound('File');
     const key = req.params.file === 'preview.mp4' ? rec.previewKey : rec.posterKey;
     if (!key) throw notFound('File');
@@ -39,7 +35,7 @@ export function mediaRouter() {
   });
 
   r.get('/recordings/:id/thumbs/:file', validate({ params: thumbFile }), async (req, res) => {
-    const rec = await load(req.params.id as string);
+    const rec = await Recording.findByPk(req.params.id as string);
     if (!rec || !(await canSeeMedia(req, rec.tutorialId))) throw notFound('File');
     const key = rec.thumbnails?.keys.find((k) => k.endsWith(`/${req.params.file}`));
     if (!key) throw notFound('File');

@@ -3,7 +3,7 @@ import type { Request } from 'express';
 import { UniqueConstraintError } from 'sequelize';
 import { idParams } from '@shared/schemas/studio';
 import { createPieceSchema, dismissMentionSchema, materialSchema, sheetPlanQuery, updateMaterialSchema, updatePieceSchema } from '@shared/schemas/piece';
-import { parseStoredLength, inchesNumber, formatLength, type LengthUnit } from '@shared/measure';
+import { inchesNumber, formatLength, type LengthUnit } from '@shared/measure';
 import { planSheets } from '@shared/geometry';
 import { Material, MentionDismissal, PieceRow, sequelize, type Tutorial } from '../../models';
 import type { StoredScoreLine } from '../../models/piece';
@@ -12,7 +12,7 @@ import { requireUser } from '../../middlewares/authenticate';
 import { authorize } from '../../policies';
 import { HttpError, notFound } from '../../lib/http-error';
 import { loadTutorial } from '../../services/access';
-import { lengthDto, loadCutList, presentMaterial, storeLength, tutorialMentions } from '../../services/cut-list';
+import { lengthDto, loadCutList, presentMaterial, stockOf, storeLength, tutorialMentions } from '../../services/cut-list';
 
 type PieceBody = {
   name?: string;
@@ -196,11 +196,8 @@ export async function sheetPlans(tutorial: Tutorial, kits: number, spares: numbe
   const groups = new Map<string, typeof list.pieces>();
   for (const p of list.pieces) groups.set(p.material, [...(groups.get(p.material) ?? []), p]);
   return [...groups.entries()].map(([name, pieces]) => {
-    const m = list.materials.find((x) => x.name.toLowerCase() === name.toLowerCase());
-    const sheet = m
-      ? { width: parseStoredLength(m.sheetWidth), height: parseStoredLength(m.sheetHeight) }
-      : { width: parseStoredLength('12 in'), height: parseStoredLength('12 in') };
-    const rotate = m?.rotate ?? true;
+    const { material: m, width, height, rotate } = stockOf(list.materials, name);
+    const sheet = { width, height };
     // A circle is cut from its square on a trimmer, then by hand.
     const plan = planSheets({ sheet, rotate, kits, spares, pieces: pieces.map((p) => ({ name: p.name, width: p.width, height: p.height, qty: p.quantity })) });
     return {
