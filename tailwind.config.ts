@@ -1,18 +1,21 @@
 import type { Config } from 'tailwindcss';
+import plugin from 'tailwindcss/plugin';
+import { palette as c, paletteCssVariables } from './shared/palette';
 
-/** The palette and type of DESIGN.md, "Look and feel". */
+/** The palette (shared/palette.ts) and type of DESIGN.md, "Look and feel". */
 export default {
   content: ['./index.html', './src/**/*.{ts,tsx}'],
   theme: {
     extend: {
       colors: {
-        paper: '#FBF8F3',
-        ink: '#22303C',
-        kraft: { DEFAULT: '#A87B4F', dark: '#8C6440', light: '#EFE4D6' },
-        sage: { DEFAULT: '#6E8B74', light: '#E3EBE4' },
-        rosehip: { DEFAULT: '#B5475B', light: '#F5E1E5' },
-        pencil: '#8A8F98',
-        line: '#E6DFD3',
+        paper: c.paper,
+        ink: c.ink,
+        kraft: { DEFAULT: c.kraft, dark: c.kraftDark, light: c.kraftLight },
+        sage: { DEFAULT: c.sage, light: c.sageLight },
+        rosehip: { DEFAULT: c.rosehip, light: c.rosehipLight },
+        pencil: c.pencil,
+        line: c.line,
+        field: c.field,
       },
       fontFamily: {
         serif: ['Merriweather', 'Georgia', 'serif'],
@@ -20,4 +23,6 @@ export default {
       },
     },
   },
+  // Every colour as a CSS variable too (--palette-kraft ...), for the plain CSS files.
+  plugins: [plugin(({ addBase }) => addBase({ ':root': paletteCssVariables() }))],
 } satisfies Config;

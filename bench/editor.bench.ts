@@ -47,7 +47,17 @@ export function longWriteUp(steps = 50, seed = 7): JSONContent {
       content: [
         { type: 'stepTitle', content: [{ type: 'text', text: `Part ${i + 1}: ${sentence(rand, 4).slice(0, -1)}` }] },
         { type: 'paragraph', content: [{ type: 'text', text: `${sentence(rand, 25)} ${sentence(rand, 18)}` }] },
-        { type: 'still', attrs: { stillId: null, src: `/media/stills/bench-${i + 1}.jpg`, alt: `Step ${i + 1} in progress`, caption: sentence(rand, 8), width: 1280, height: 720 } },
+        {
+          type: 'still',
+          attrs: {
+            stillId: null,
+            src: `/media/stills/bench-${i + 1}.jpg`,
+            alt: `Step ${i + 1} in progress`,
+            caption: sentence(rand, 8),
+            width: 1280,
+            height: 720,
+          },
+        },
         { type: 'paragraph', content: [{ type: 'text', text: sentence(rand, 20) }] },
       ],
     });
@@ -55,19 +65,26 @@ export function longWriteUp(steps = 50, seed = 7): JSONContent {
   return { type: 'doc', content };
 }
 
-const ONE_PARAGRAPH: JSONContent = { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'A gatefold card with a pocket for a tag.' }] }] };
+const ONE_PARAGRAPH: JSONContent = {
+  type: 'doc',
+  content: [{ type: 'paragraph', content: [{ type: 'text', text: 'A gatefold card with a pocket for a tag.' }] }],
+};
 
 /** Saves over and over, each time with the version the last save returned (as autosave does). */
 async function timeSaves(c: BenchClient, tutorialId: string, doc: JSONContent, runs: number): Promise<Timing> {
   let version = (await c.request('GET', `/api/tutorials/${tutorialId}/article`)).json.version as number;
   let n = 0;
-  return timeAsync(async () => {
-    // A real change each time, at the end of the document.
-    const edited = { ...doc, content: [...doc.content!, { type: 'paragraph', content: [{ type: 'text', text: `Edit ${++n}` }] }] };
-    const r = await c.request('PUT', `/api/tutorials/${tutorialId}/article`, { doc: edited, version });
-    if (r.status !== 200) throw new Error(`PUT answered ${r.status}: ${JSON.stringify(r.json).slice(0, 200)}`);
-    version = r.json.version;
-  }, runs, 2);
+  return timeAsync(
+    async () => {
+      // A real change each time, at the end of the document.
+      const edited = { ...doc, content: [...doc.content!, { type: 'paragraph', content: [{ type: 'text', text: `Edit ${++n}` }] }] };
+      const r = await c.request('PUT', `/api/tutorials/${tutorialId}/article`, { doc: edited, version });
+      if (r.status !== 200) throw new Error(`PUT answered ${r.status}: ${JSON.stringify(r.json).slice(0, 200)}`);
+      version = r.json.version;
+    },
+    runs,
+    2,
+  );
 }
 
 type Keystroke = { total: number; editorReady: number; keyToDom: number };
@@ -109,7 +126,11 @@ async function keystrokes(browser: Browser, cookie: { name: string; value: strin
     warm.push(await firstKeystroke(ctx, url, true));
     await ctx.close();
   }
-  const sum = (xs: Keystroke[]) => ({ total: median(xs.map((x) => x.total)), editorReady: median(xs.map((x) => x.editorReady)), keyToDom: median(xs.map((x) => x.keyToDom)) });
+  const sum = (xs: Keystroke[]) => ({
+    total: median(xs.map((x) => x.total)),
+    editorReady: median(xs.map((x) => x.editorReady)),
+    keyToDom: median(xs.map((x) => x.keyToDom)),
+  });
   return { cold: sum(cold), warm: sum(warm) };
 }
 

@@ -41,7 +41,9 @@ async function makeStill(file: string, seed: number): Promise<void> {
       raw[i + 2] = Math.max(0, Math.min(255, b0 + ((x + y) / (w + h)) * 55 + n));
     }
   }
-  await sharp(raw, { raw: { width: w, height: h, channels: 3 } }).jpeg({ quality: 90 }).toFile(file);
+  await sharp(raw, { raw: { width: w, height: h, channels: 3 } })
+    .jpeg({ quality: 90 })
+    .toFile(file);
 }
 
 /** The hatbox bundle stretched to 30 steps, each with its own full-size still. */
@@ -92,7 +94,7 @@ export async function benchExportZip(runs = 3): Promise<{ zipMs: number; readMs:
 }
 
 if (isMain(import.meta.url)) {
-  benchExportZip(numberArg('runs', 3)).then((r) => {
+  void benchExportZip(numberArg('runs', 3)).then((r) => {
     if (!r.pass) process.exitCode = 1;
   });
 }

@@ -55,7 +55,9 @@ export async function benchFootageApi(runs = 7) {
     const growthMb = (peak - before.rss) / 1024 ** 2;
     console.log('upload of 1 GiB over loopback:');
     console.log(`  ${seconds.toFixed(1)} s, ${(1024 / seconds).toFixed(0)} MiB/s`);
-    console.log(`  server memory ${(before.rss / 1024 ** 2).toFixed(0)} MB before, peak ${(peak / 1024 ** 2).toFixed(0)} MB during: grew ${growthMb.toFixed(0)} MB, target < 100 MB: ${growthMb < 100 ? 'PASS' : 'FAIL'}`);
+    console.log(
+      `  server memory ${(before.rss / 1024 ** 2).toFixed(0)} MB before, peak ${(peak / 1024 ** 2).toFixed(0)} MB during: grew ${growthMb.toFixed(0)} MB, target < 100 MB: ${growthMb < 100 ? 'PASS' : 'FAIL'}`,
+    );
 
     // 2. still through the API
     const rec = await c.upload(`/api/tutorials/${server.tutorialId}/recordings`, STILL_SOURCE, 'five-minutes.mp4');
@@ -94,10 +96,13 @@ export async function benchFootageApi(runs = 7) {
 
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
   const i = process.argv.indexOf('--runs');
-  benchFootageApi(i > 0 ? Number(process.argv[i + 1]) : 7).then((r) => {
-    if (!(r.growthMb < 100 && r.ratio <= 1.3)) process.exitCode = 1;
-  }, (e) => {
-    console.error(e);
-    process.exitCode = 1;
-  });
+  benchFootageApi(i > 0 ? Number(process.argv[i + 1]) : 7).then(
+    (r) => {
+      if (!(r.growthMb < 100 && r.ratio <= 1.3)) process.exitCode = 1;
+    },
+    (e) => {
+      console.error(e);
+      process.exitCode = 1;
+    },
+  );
 }

@@ -11,7 +11,20 @@ import { isMain, ms, numberArg, seeded, timeSync, verdict } from './lib';
 
 const TARGET_MS = 250;
 
-const LENGTHS = ['four and a quarter', '5 1/2', 'ten and nine sixteenths', '3½', 'two and a half inches', '6 3/8', 'half an inch', '13 mm', 'an inch and a quarter', 'one point five', '⅝', 'nine sixteenths'];
+const LENGTHS = [
+  'four and a quarter',
+  '5 1/2',
+  'ten and nine sixteenths',
+  '3½',
+  'two and a half inches',
+  '6 3/8',
+  'half an inch',
+  '13 mm',
+  'an inch and a quarter',
+  'one point five',
+  '⅝',
+  'nine sixteenths',
+];
 const SENTENCES: ((l: () => string) => string)[] = [
   (l) => `okay so um cut your card base ${l()} by ${l()} and set it aside`,
   (l) => `then you want to score it at ${l()} and at ${l()}`,

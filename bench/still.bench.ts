@@ -32,8 +32,26 @@ export async function ensureStillSource(): Promise<void> {
   const started = performance.now();
   console.log('making a 5-minute 1920x1080 H.264 source (once; cached in bench/out/) ...');
   await run(FFMPEG_PATH, [
-    '-v', 'error', '-y', '-f', 'lavfi', '-i', 'testsrc2=s=1920x1080:r=25:d=300',
-    '-c:v', 'libx264', '-preset', 'ultrafast', '-crf', '32', '-g', '100', '-pix_fmt', 'yuv420p', '-f', 'mp4', partial,
+    '-v',
+    'error',
+    '-y',
+    '-f',
+    'lavfi',
+    '-i',
+    'testsrc2=s=1920x1080:r=25:d=300',
+    '-c:v',
+    'libx264',
+    '-preset',
+    'ultrafast',
+    '-crf',
+    '32',
+    '-g',
+    '100',
+    '-pix_fmt',
+    'yuv420p',
+    '-f',
+    'mp4',
+    partial,
   ]);
   await rename(partial, SOURCE);
   console.log(`  made in ${((performance.now() - started) / 1000).toFixed(1)} s`);
@@ -87,7 +105,7 @@ export async function benchStill(runs = 9): Promise<StillBenchResult> {
 if (process.argv[1] && fileURLToPath(import.meta.url) === process.argv[1]) {
   const i = process.argv.indexOf('--runs');
   const runs = i > 0 ? Number(process.argv[i + 1]) : 9;
-  benchStill(runs).then((r) => {
+  void benchStill(runs).then((r) => {
     if (!r.pass) process.exitCode = 1;
   });
 }

@@ -13,7 +13,11 @@ startCluster();
 await ensureDatabase('cardwright');
 const env = { ...process.env, ...appEnv('dev', 3000), CARDWRIGHT_SKIP_BUILD: '1' };
 const bin = (p: string) => path.join(PROJECT_ROOT, 'node_modules', p);
-const api = spawn(process.execPath, [bin('tsx/dist/cli.mjs'), 'watch', '--clear-screen=false', 'scripts/start.ts'], { cwd: PROJECT_ROOT, env, stdio: 'inherit' });
+const api = spawn(process.execPath, [bin('tsx/dist/cli.mjs'), 'watch', '--clear-screen=false', 'scripts/start.ts'], {
+  cwd: PROJECT_ROOT,
+  env,
+  stdio: 'inherit',
+});
 const vite = spawn(process.execPath, [bin('vite/bin/vite.js')], { cwd: PROJECT_ROOT, env, stdio: 'inherit' });
 const stop = () => {
   api.kill('SIGTERM');

@@ -19,7 +19,7 @@ function run(...args: string[]): Promise<{ code: number; json: any; stdout: stri
   return new Promise((resolve) => {
     execFile('npx', ['tsx', 'scripts/measure.ts', ...args], { cwd: root, timeout: 60_000 }, (err, stdout) => {
       const code = err ? (typeof err.code === 'number' ? err.code : 1) : 0;
-      let json: unknown = null;
+      let json: unknown;
       try {
         json = JSON.parse(stdout);
       } catch {
@@ -80,7 +80,9 @@ describe('measure CLI: transcripts', () => {
   it('reads SRT and plain timed lines', async () => {
     const srt = file('card.srt', '1\n00:00:02,000 --> 00:00:05,000\nscore it at four and a quarter\n\n2\n00:00:05,000 --> 00:00:08,000\nthat is it\n');
     const r = await run('--file', srt);
-    expect(r.json.mentions).toEqual([{ kind: 'score', inches: [4.25], approx: false, text: 'score it at four and a quarter', display: ['4 1/4 in'], startMs: 2000, endMs: 5000 }]);
+    expect(r.json.mentions).toEqual([
+      { kind: 'score', inches: [4.25], approx: false, text: 'score it at four and a quarter', display: ['4 1/4 in'], startMs: 2000, endMs: 5000 },
+    ]);
     const plain = file('box.txt', '[0:05] a strip about ten and nine sixteenths long\n1:02:03 and a 3 inch circle\n');
     const p = await run('--file', plain);
     expect(p.json.mentions.map((m: { startMs: number; approx: boolean }) => [m.startMs, m.approx])).toEqual([
@@ -114,8 +116,13 @@ describe('measure CLI: helpers', () => {
     expect(r.json.stripLength.display).toBe('10 9/16 in');
   });
 
-  it('wrap refuses bad arguments', async () => {
-    for (const args of [['wrap'], ['wrap', '--diameter', 'lots'], ['wrap', '--diameter', '4', '--precision', '10'], ['wrap', '--diameter', '4', '--pieces', '0']]) {
+  it('wrap refuses bad arguments', { timeout: 180_000 }, async () => {
+    for (const args of [
+      ['wrap'],
+      ['wrap', '--diameter', 'lots'],
+      ['wrap', '--diameter', '4', '--precision', '10'],
+      ['wrap', '--diameter', '4', '--pieces', '0'],
+    ]) {
       const r = await run(...args);
       expect(r.code, args.join(' ')).toBe(2);
       expect(typeof r.json.error).toBe('string');
@@ -140,7 +147,10 @@ describe('measure CLI: helpers', () => {
 
 describe('measure CLI: plan', () => {
   it('lays four A2 panels on one 12 x 12 sheet', async () => {
-    const f = file('plan.json', JSON.stringify({ sheet: { width: '12', height: '12' }, rotate: true, kits: 1, pieces: [{ name: 'panel', width: '4 1/4', height: '5 1/2', qty: 4 }] }));
+    const f = file(
+      'plan.json',
+      JSON.stringify({ sheet: { width: '12', height: '12' }, rotate: true, kits: 1, pieces: [{ name: 'panel', width: '4 1/4', height: '5 1/2', qty: 4 }] }),
+    );
     const r = await run('plan', '--file', f);
     expect(r.code).toBe(0);
     expect(r.json.sheets).toBe(1);
@@ -150,7 +160,19 @@ describe('measure CLI: plan', () => {
   });
 
   it('accepts a named sheet and reports a piece too big for it', async () => {
-    const f = file('plan2.json', JSON.stringify({ sheet: 'letter', rotate: false, kits: 2, spares: 1, pieces: [{ name: 'wall', width: '20', height: '2', qty: 1 }, { name: 'tag', width: 2, height: '3 1/2' }] }));
+    const f = file(
+      'plan2.json',
+      JSON.stringify({
+        sheet: 'letter',
+        rotate: false,
+        kits: 2,
+        spares: 1,
+        pieces: [
+          { name: 'wall', width: '20', height: '2', qty: 1 },
+          { name: 'tag', width: 2, height: '3 1/2' },
+        ],
+      }),
+    );
     const r = await run('plan', '--file', f);
     expect(r.code).toBe(0);
     expect(r.json.placements).toHaveLength(3);

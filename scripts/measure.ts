@@ -1,12 +1,16 @@
 /**
- * The measurement engine from the command line. Prints JSON on stdout.
+ * The measurement engine from the command line. Prints JSON on stdout. A mention has `kind`
+ * (size, score, length, diameter or range), `inches`, `approx`, `text`, `display`, and when they
+ * apply `mm`, `corrected`, `every` (the step of repeated score lines, as {inches, display, mm};
+ * `inches` then holds the first line) and `count` (how many were said before it).
  * Exit 0 on success; exit 2 with {"error": "..."} for bad arguments or an unreadable file.
  *
  *   measure "<text>" [--unit in|mm|cm]
  *   measure --file <transcript.vtt|.srt|.txt> [--unit in|mm|cm]
  *   measure wrap --diameter "6 3/8" [--pieces 2] [--overlap "1/2"] [--caliper 0.012] [--precision 16]
  *   measure lid --diameter 4 [--wall 0.012] [--clearance "1/32"] [--precision 16]
- *   measure card (--size "4 1/4 x 5 1/2" | --width "4 1/4" --height "5 1/2") --fold top|side|gatefold
+ *   measure card (--size "4 1/4 x 5 1/2" | --width "4 1/4" --height "5 1/2") --fold side|top|gatefold|z-fold|tri-fold|shutter|easel
+ *                [--relief "1/16"] [--caliper "0.3 mm"] [--outer-flap "1 1/2"] [--stopper 1] [--precision 16]
  *   measure plan --file <pieces.json>
  */
 import { readFileSync } from 'node:fs';
@@ -24,8 +28,9 @@ import {
   type Mention,
   type RulerPrecision,
 } from '@shared/measure';
-import { cardBase, FOLD_STYLES, lidCircle, planSheets, sheetSize, wrapStrip, type FoldStyle } from '@shared/geometry';
-import { parseTranscript, TranscriptParseError } from '@shared/transcript/parse';
+import { cardBase, FOLD_STYLES, lidCircle, placementsOf, planSheets, sheetSize, wrapStrip, type FoldStyle } from '@shared/geometry';
+import { sheetPlanTooLarge } from '@shared/schemas/sheet-plan';
+import { parseUsableTranscript, TranscriptParseError } from '@shared/transcript/parse';
 
 class UsageError extends Error {}
 
@@ -34,7 +39,7 @@ const USAGE = [
   'measure --file <transcript> [--unit in|mm|cm]',
   'measure wrap --diameter <length> [--pieces N] [--overlap <length>] [--caliper <length>] [--precision 8|16|32]',
   'measure lid --diameter <length> [--wall <length>] [--clearance <length>] [--precision 8|16|32]',
-  'measure card (--size "<w> x <h>" | --width <length> --height <length>) --fold top|side|gatefold',
+  `measure card (--size "<w> x <h>" | --width <length> --height <length>) --fold ${FOLD_STYLES.join('|')} [--relief <length>] [--caliper <length>] [--outer-flap <length>] [--stopper <length>] [--precision 8|16|32]`,
   'measure plan --file <pieces.json>',
 ];
 
@@ -111,6 +116,9 @@ function mentionJson(m: Mention, timing?: { startMs: number; endMs: number }) {
   };
   if (m.values.some((v) => v.unit !== 'in')) out.mm = m.values.map(mmNumber);
   if (m.corrected) out.corrected = true;
+  // repeated score lines: the step; `inches` holds the first line
+  if (m.every) out.every = lengthJson(m.every);
+  if (m.count !== undefined) out.count = m.count;
   if (timing) {
     out.startMs = timing.startMs;
     out.endMs = timing.endMs;
@@ -132,14 +140,16 @@ function mentionsCommand(args: readonly string[]): unknown {
   const file = f.flags.get('file');
   if (file !== undefined) {
     noPositional(f);
-    let cues;
+    let parsed;
     try {
-      cues = parseTranscript(readText(file)).cues;
+      parsed = parseUsableTranscript(readText(file));
     } catch (e) {
       if (e instanceof TranscriptParseError) throw new UsageError(e.message);
       throw e;
     }
-    return { mentions: extractMentionsFromCues(cues, { defaultUnit: unit }).map((m) => mentionJson(m, m)) };
+    const mentions = extractMentionsFromCues(parsed.cues, { defaultUnit: unit }).map((m) => mentionJson(m, m));
+    // what the reader skipped or kept with a note ("line 3: skipped a title ..."), only when there is any
+    return parsed.notices ? { mentions, notices: parsed.notices.map((n) => n.message) } : { mentions };
   }
   if (f.positional.length === 0) throw new UsageError('give a text to read, or --file <transcript>');
   return { mentions: extractMentions(f.positional.join(' '), { defaultUnit: unit }).map((m) => mentionJson(m)) };
@@ -164,12 +174,17 @@ function wrapCommand(args: readonly string[]): unknown {
 function lidCommand(args: readonly string[]): unknown {
   const f = parseArgs(args, ['diameter', 'wall', 'clearance', 'precision']);
   noPositional(f);
-  const r = lidCircle({ diameter: requiredLength(f, 'diameter'), wall: optionalLength(f, 'wall'), clearance: optionalLength(f, 'clearance'), precision: precisionArg(f) });
+  const r = lidCircle({
+    diameter: requiredLength(f, 'diameter'),
+    wall: optionalLength(f, 'wall'),
+    clearance: optionalLength(f, 'clearance'),
+    precision: precisionArg(f),
+  });
   return { lidDiameter: lengthJson(r.lidDiameter), working: r.working };
 }
 
 function cardCommand(args: readonly string[]): unknown {
-  const f = parseArgs(args, ['size', 'width', 'height', 'fold']);
+  const f = parseArgs(args, ['size', 'width', 'height', 'fold', 'relief', 'caliper', 'outer-flap', 'stopper', 'precision']);
   noPositional(f);
   const fold = f.flags.get('fold') ?? 'side';
   if (!(FOLD_STYLES as readonly string[]).includes(fold)) throw new UsageError(`--fold must be one of ${FOLD_STYLES.join(', ')} (got ${JSON.stringify(fold)})`);
@@ -179,32 +194,42 @@ function cardCommand(args: readonly string[]): unknown {
   if (size !== undefined) {
     if (f.flags.has('width') || f.flags.has('height')) throw new UsageError('give --size or --width and --height, not both');
     const m = extractMentions(size);
-    if (m.length !== 1 || m[0]!.kind !== 'size' || m[0]!.values.length !== 2) throw new UsageError(`--size: cannot read ${JSON.stringify(size)} as a size like "4 1/4 x 5 1/2"`);
+    if (m.length !== 1 || m[0]!.kind !== 'size' || m[0]!.values.length !== 2)
+      throw new UsageError(`--size: cannot read ${JSON.stringify(size)} as a size like "4 1/4 x 5 1/2"`);
     [width, height] = m[0]!.values as [Length, Length];
   } else {
     width = requiredLength(f, 'width');
     height = requiredLength(f, 'height');
   }
-  const r = cardBase({ width, height, fold: fold as FoldStyle });
+  const r = cardBase({
+    width,
+    height,
+    fold: fold as FoldStyle,
+    relief: optionalLength(f, 'relief'),
+    caliper: optionalLength(f, 'caliper'),
+    outerFlap: optionalLength(f, 'outer-flap'),
+    stopper: optionalLength(f, 'stopper'),
+    precision: precisionArg(f),
+  });
   return {
     flat: { width: lengthJson(r.flatWidth), height: lengthJson(r.flatHeight) },
     scoreLines: r.scoreLines.map((s) => ({ axis: s.axis, at: lengthJson(s.at) })),
+    panels: r.panels.map((p) => ({ name: p.name, size: lengthJson(p.size) })),
+    grain: r.grain,
+    ...(r.stopper
+      ? { stopper: { fromEdge: lengthJson(r.stopper.fromEdge), fromFold: lengthJson(r.stopper.fromFold), leanDegrees: r.stopper.leanDegrees } }
+      : {}),
     working: r.working,
   };
 }
 
 const lengthField = z.union([z.string().min(1), z.number().nonnegative()]).transform((v) => String(v));
 const planSchema = z.object({
-  sheet: z.union([
-    z.string().min(1),
-    z.object({ width: lengthField, height: lengthField }),
-  ]),
+  sheet: z.union([z.string().min(1), z.object({ width: lengthField, height: lengthField })]),
   rotate: z.boolean().default(true),
   kits: z.number().int().min(0).default(1),
   spares: z.number().int().min(0).default(0),
-  pieces: z
-    .array(z.object({ name: z.string().min(1), width: lengthField, height: lengthField, qty: z.number().int().min(0).default(1) }))
-    .min(1),
+  pieces: z.array(z.object({ name: z.string().min(1), width: lengthField, height: lengthField, qty: z.number().int().min(0).default(1) })).min(1),
 });
 
 function planCommand(args: readonly string[]): unknown {
@@ -237,6 +262,12 @@ function planCommand(args: readonly string[]): unknown {
     if (!named) throw new UsageError(`${file}: sheet: unknown sheet size ${JSON.stringify(spec.sheet)}`);
     sheet = { width: named.width, height: named.height };
   } else sheet = { width: at('sheet.width', spec.sheet.width), height: at('sheet.height', spec.sheet.height) };
+  const tooLarge = sheetPlanTooLarge(
+    spec.pieces.length,
+    spec.pieces.reduce((n, p) => n + p.qty, 0),
+    spec.kits + spec.spares,
+  );
+  if (tooLarge) throw new UsageError(`${file}: ${tooLarge}`);
   const plan = planSheets({
     sheet,
     rotate: spec.rotate,
@@ -244,9 +275,27 @@ function planCommand(args: readonly string[]): unknown {
     spares: spec.spares,
     pieces: spec.pieces.map((p, i) => ({ name: p.name, width: at(`pieces.${i}.width`, p.width), height: at(`pieces.${i}.height`, p.height), qty: p.qty })),
   });
+  const lengthIn = (l: Length) => inchesNumber(l);
   return {
     sheets: plan.sheets,
-    placements: plan.placements.map((p) => ({
+    // identical sheets once, with their count ("7 sheets like this"); blocks are across x down copies
+    patterns: plan.patterns.map((pt) => ({
+      first: pt.first,
+      count: pt.count,
+      pieces: pt.pieces,
+      blocks: pt.blocks.map((b) => ({
+        name: b.name,
+        x: lengthIn(b.x),
+        y: lengthIn(b.y),
+        width: lengthIn(b.width),
+        height: lengthIn(b.height),
+        rotated: b.rotated,
+        across: b.across,
+        down: b.down,
+      })),
+    })),
+    // and every piece on every sheet, one by one
+    placements: placementsOf(plan).map((p) => ({
       sheet: p.sheet,
       name: p.name,
       x: inchesNumber(p.x),

@@ -3,6 +3,7 @@ import { config } from './config';
 import { sequelize } from './models';
 import { createApp } from './app';
 import { startWorkers, stopQueue } from './jobs';
+import { warmSheetPlans } from './services/sheet-plan';
 
 /** Boots the database connection and the HTTP server; resolves once it listens. */
 export async function startServer(opts: { port?: number } = {}): Promise<{ server: Server; stop: () => Promise<void> }> {
@@ -14,7 +15,8 @@ export async function startServer(opts: { port?: number } = {}): Promise<{ serve
   const server = createServer(app);
   server.requestTimeout = 0; // multi-GB uploads take longer than Node's default five minutes
   // Workers run in the app process by default; WORKERS=off leaves ffmpeg to other machines.
-  if (process.env.WORKERS !== 'off') await startWorkers();
+  if (config.workersInProcess) await startWorkers();
+  warmSheetPlans();
   const port = opts.port ?? config.port;
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);

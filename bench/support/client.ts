@@ -55,7 +55,18 @@ export class BenchClient {
     return new Promise((resolve, reject) => {
       const u = new URL(this.base + url);
       const req = http.request(
-        { host: u.hostname, port: u.port, path: u.pathname, method: 'POST', headers: { cookie: this.cookie, 'x-csrf-token': this.csrf, 'content-type': `multipart/form-data; boundary=${boundary}`, 'content-length': head.length + size + tail.length } },
+        {
+          host: u.hostname,
+          port: u.port,
+          path: u.pathname,
+          method: 'POST',
+          headers: {
+            cookie: this.cookie,
+            'x-csrf-token': this.csrf,
+            'content-type': `multipart/form-data; boundary=${boundary}`,
+            'content-length': head.length + size + tail.length,
+          },
+        },
         (res) => {
           let body = '';
           res.on('data', (d) => (body += d));

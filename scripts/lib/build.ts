@@ -19,6 +19,9 @@ export function buildClientIfStale(force = false): void {
   const srcTime = Math.max(...sources.filter(existsSync).map((p) => (statSync(p).isDirectory() ? newest(p) : statSync(p).mtimeMs)));
   if (!force && existsSync(out) && statSync(out).mtimeMs >= srcTime) return;
   console.log('Building the client ...');
-  const r = spawnSync(process.execPath, [path.join(PROJECT_ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], { cwd: PROJECT_ROOT, stdio: 'inherit' });
+  const r = spawnSync(process.execPath, [path.join(PROJECT_ROOT, 'node_modules/vite/bin/vite.js'), 'build', '--logLevel', 'warn'], {
+    cwd: PROJECT_ROOT,
+    stdio: 'inherit',
+  });
   if (r.status !== 0) throw new Error('The client build failed (see above).');
 }

@@ -93,7 +93,11 @@ export function startCluster(): void {
     const pwfile = path.join(base, 'pwfile');
     writeFileSync(pwfile, PG_PASSWORD + '\n', { mode: 0o644 });
     console.log(`Creating the project's PostgreSQL cluster in ${data}`);
-    runAsPostgres(`${PG_BIN}/initdb`, ['-D', data, '-U', PG_USER, `--pwfile=${pwfile}`, '--auth-local=trust', '--auth-host=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8'], { quiet: true });
+    runAsPostgres(
+      `${PG_BIN}/initdb`,
+      ['-D', data, '-U', PG_USER, `--pwfile=${pwfile}`, '--auth-local=trust', '--auth-host=scram-sha-256', '-E', 'UTF8', '--locale=C.UTF-8'],
+      { quiet: true },
+    );
   }
   owned(run);
   if (isRunning(data)) return;

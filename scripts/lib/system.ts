@@ -12,11 +12,7 @@ export const APP_NEEDS: DebianNeed[] = [
   { pkg: 'fonts-dejavu-core', file: '/usr/share/fonts/truetype/dejavu/DejaVuSans.ttf' },
 ];
 
-export const TEST_NEEDS: DebianNeed[] = [
-  ...APP_NEEDS,
-  { pkg: 'chromium', file: '/usr/bin/chromium' },
-  { pkg: 'poppler-utils', file: '/usr/bin/pdftoppm' },
-];
+export const TEST_NEEDS: DebianNeed[] = [...APP_NEEDS, { pkg: 'chromium', file: '/usr/bin/chromium' }, { pkg: 'poppler-utils', file: '/usr/bin/pdftoppm' }];
 
 export const isRoot = () => typeof process.getuid === 'function' && process.getuid() === 0;
 

@@ -4,7 +4,15 @@ import { config } from '../config';
 let boss: PgBoss | null = null;
 let starting: Promise<PgBoss> | null = null;
 
-export const QUEUES = { processRecording: 'process-recording' } as const;
+// QUEUE_PROCESS_RECORDING and QUEUE_PUBLISH_TUTORIAL give a test its own queue, so workers of other tests never take its jobs.
+export const QUEUES = {
+  processRecording: process.env.QUEUE_PROCESS_RECORDING || 'process-recording',
+  publishTutorial: process.env.QUEUE_PUBLISH_TUTORIAL || 'publish-tutorial',
+  pullStill: process.env.QUEUE_PULL_STILL || 'pull-still',
+  classReminder: 'class-reminder',
+  expireHold: 'expire-hold',
+  sweepHolds: 'sweep-holds',
+} as const;
 
 /**
  * The PostgreSQL-backed job queue (pg-boss keeps its tables in its own `pgboss` schema), so

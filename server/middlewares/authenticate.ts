@@ -1,29 +1,49 @@
 import type { RequestHandler } from 'express';
-import { User } from '../models';
-import { unauthorized } from '../lib/http-error';
+import { Membership, User } from '../models';
 
 declare module 'express-session' {
   interface SessionData {
     userId?: string;
     csrfToken?: string;
+    /** When the person signed in (ms since the epoch), for the absolute lifetime. */
+    signedInAt?: number;
   }
 }
 
-declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
-  namespace Express {
-    interface Request {
-      user?: User;
+// The signed-in person on every request (set by loadUser below).
+declare module 'express-serve-static-core' {
+  interface Request {
+    user?: User;
+  }
+}
+
+/**
+ * Ends a signed-in session older than `maxAgeMs` since sign-in, however active it stayed: the
+ * rolling cookie alone would let a stolen session live for ever. The stored row goes and the
+ * request carries on signed out. A session from before this rule gets its clock started now.
+ */
+export function endOldSessions(maxAgeMs: number): RequestHandler {
+  return (req, _res, next) => {
+    const s = req.session;
+    if (!s?.userId) return next();
+    if (s.signedInAt === undefined) {
+      s.signedInAt = Date.now();
+      return next();
     }
-  }
+    if (Date.now() - s.signedInAt <= maxAgeMs) return next();
+    s.regenerate((err) => next(err));
+  };
 }
 
-/** Loads the signed-in person (if any) onto req.user. */
+/**
+ * Loads the signed-in person (if any) onto req.user, with their roles in one query: every access
+ * check of the request reads the role from there instead of asking the database again.
+ */
 export const loadUser: RequestHandler = async (req, _res, next) => {
   try {
     const id = req.session?.userId;
-    if (id) {
-      const user = await User.findByPk(id);
+    if (id && !req.user) {
+      const user = await User.findByPk(id, { include: [{ model: Membership, as: 'memberships', attributes: ['id', 'studioId', 'role'] }] });
       if (user) req.user = user;
       else delete req.session.userId;
     }
@@ -32,15 +52,3 @@ export const loadUser: RequestHandler = async (req, _res, next) => {
     next(e);
   }
 };
-
-/** 401 unless someone is signed in. */
-export const requireUser: RequestHandler = (req, _res, next) => {
-  if (!req.user) return next(unauthorized());
-  next();
-};
-
-/** The signed-in person; only call after requireUser. */
-export function currentUser(req: Express.Request): User {
-  if (!req.user) throw unauthorized();
-  return req.user;
-}

@@ -18,7 +18,9 @@ export async function up({ context: qi }: { context: QueryInterface }) {
   });
   await qi.addConstraint('tutorials', { fields: ['studio_id', 'slug'], type: 'unique', name: 'tutorials_studio_slug' });
   await qi.addIndex('tutorials', ['studio_id', 'state']);
-  await qi.sequelize.query(`ALTER TABLE tutorials ADD CONSTRAINT tutorials_state CHECK (state IN ('draft','in_review','needs_changes','approved','published'))`);
+  await qi.sequelize.query(
+    `ALTER TABLE tutorials ADD CONSTRAINT tutorials_state CHECK (state IN ('draft','in_review','needs_changes','approved','published'))`,
+  );
   await qi.sequelize.query(`ALTER TABLE tutorials ADD CONSTRAINT tutorials_precision CHECK (precision IN (8,16,32))`);
 }
 

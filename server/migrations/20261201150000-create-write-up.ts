@@ -43,7 +43,9 @@ export async function up({ context: qi }: { context: QueryInterface }) {
     ...stamps,
   });
   await qi.addIndex('supplies', ['tutorial_id', 'position']);
-  await qi.sequelize.query(`ALTER TABLE supplies ADD CONSTRAINT supplies_category CHECK (category IN ('paper','cardstock','embellishment','adhesive','tool','other'))`);
+  await qi.sequelize.query(
+    `ALTER TABLE supplies ADD CONSTRAINT supplies_category CHECK (category IN ('paper','cardstock','embellishment','adhesive','tool','other'))`,
+  );
   await qi.addColumn('tutorials', 'disclosure', { type: DataTypes.TEXT, allowNull: true });
 }
 

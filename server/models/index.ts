@@ -11,8 +11,22 @@ import { Cue } from './cue';
 import { Chapter } from './chapter';
 import { Still } from './still';
 import { PieceRow } from './piece';
-import { Material, MentionDismissal } from './material';
-import { Article, Revision, Supply } from './article';
+import { Material } from './material';
+import { MentionDismissal } from './mention-dismissal';
+import { Article } from './article';
+import { Revision } from './revision';
+import { Supply } from './supply';
+import { CraftClass } from './class';
+import { Registration } from './registration';
+import { PaymentEvent } from './payment-event';
+import { TutorialVersion } from './tutorial-version';
+import { watchReaderEdits } from './reader-edits';
+import { AssemblyProposal } from './assembly-proposal';
+import { Brief } from './brief';
+import { MonthlyTarget } from './monthly-target';
+import { Comment } from './comment';
+import { StateChange } from './state-change';
+import { MailOptOut } from './mail-opt-out';
 
 User.initModel(sequelize);
 Studio.initModel(sequelize);
@@ -31,6 +45,16 @@ MentionDismissal.initModel(sequelize);
 Article.initModel(sequelize);
 Revision.initModel(sequelize);
 Supply.initModel(sequelize);
+CraftClass.initModel(sequelize);
+Registration.initModel(sequelize);
+PaymentEvent.initModel(sequelize);
+TutorialVersion.initModel(sequelize);
+AssemblyProposal.initModel(sequelize);
+Brief.initModel(sequelize);
+MonthlyTarget.initModel(sequelize);
+Comment.initModel(sequelize);
+StateChange.initModel(sequelize);
+MailOptOut.initModel(sequelize);
 
 Studio.hasMany(Membership, { foreignKey: 'studioId', as: 'memberships' });
 Membership.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
@@ -55,11 +79,68 @@ PieceRow.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 Tutorial.hasMany(Material, { foreignKey: 'tutorialId', as: 'materials' });
 Material.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 MentionDismissal.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+AssemblyProposal.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 Article.belongsTo(User, { foreignKey: 'updatedById', as: 'updatedBy' });
 Revision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
 Article.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 Revision.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 Supply.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
 Tutorial.hasMany(Supply, { foreignKey: 'tutorialId', as: 'supplies' });
+CraftClass.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
+CraftClass.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+CraftClass.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+CraftClass.hasMany(Registration, { foreignKey: 'classId', as: 'registrations' });
+Registration.belongsTo(CraftClass, { foreignKey: 'classId', as: 'class' });
+Registration.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Tutorial.hasMany(TutorialVersion, { foreignKey: 'tutorialId', as: 'versions' });
+TutorialVersion.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+TutorialVersion.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+Brief.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
+Brief.belongsTo(User, { foreignKey: 'makerId', as: 'maker' });
+Brief.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
+Brief.hasOne(Tutorial, { foreignKey: 'briefId', as: 'tutorial' });
+Tutorial.belongsTo(Brief, { foreignKey: 'briefId', as: 'brief' });
+Tutorial.belongsTo(User, { foreignKey: 'publishScheduledById', as: 'publishScheduledBy' });
+MonthlyTarget.belongsTo(Studio, { foreignKey: 'studioId', as: 'studio' });
+MonthlyTarget.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+Tutorial.hasMany(Comment, { foreignKey: 'tutorialId', as: 'comments' });
+Comment.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+Comment.belongsTo(User, { foreignKey: 'resolvedById', as: 'resolvedBy' });
+Comment.belongsTo(Comment, { foreignKey: 'parentId', as: 'parent' });
+Comment.hasMany(Comment, { foreignKey: 'parentId', as: 'replies' });
+Tutorial.hasMany(StateChange, { foreignKey: 'tutorialId', as: 'stateChanges' });
+StateChange.belongsTo(Tutorial, { foreignKey: 'tutorialId', as: 'tutorial' });
+StateChange.belongsTo(User, { foreignKey: 'byId', as: 'by' });
+watchReaderEdits();
 
-export { sequelize, Article, Revision, Supply, PieceRow, Material, MentionDismissal, Recording, Cue, Chapter, Still, User, Studio, Membership, Invitation, PasswordReset, OutboxMessage, Tutorial };
+export {
+  sequelize,
+  TutorialVersion,
+  AssemblyProposal,
+  Brief,
+  MonthlyTarget,
+  Comment,
+  StateChange,
+  MailOptOut,
+  CraftClass,
+  Registration,
+  PaymentEvent,
+  Article,
+  Revision,
+  Supply,
+  PieceRow,
+  Material,
+  MentionDismissal,
+  Recording,
+  Cue,
+  Chapter,
+  Still,
+  User,
+  Studio,
+  Membership,
+  Invitation,
+  PasswordReset,
+  OutboxMessage,
+  Tutorial,
+};

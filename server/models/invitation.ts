@@ -1,4 +1,13 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
 import type { Studio } from './studio';
 
@@ -20,7 +29,13 @@ export class Invitation extends Model<InferAttributes<Invitation>, InferCreation
     Invitation.init(
       {
         id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-        email: { type: DataTypes.TEXT, allowNull: false, set(v: string) { this.setDataValue('email', v.trim().toLowerCase()); } },
+        email: {
+          type: DataTypes.TEXT,
+          allowNull: false,
+          set(v: string) {
+            this.setDataValue('email', v.trim().toLowerCase());
+          },
+        },
         role: { type: DataTypes.TEXT, allowNull: false },
         tokenHash: { type: DataTypes.TEXT, allowNull: false, unique: true },
         expiresAt: { type: DataTypes.DATE, allowNull: false },

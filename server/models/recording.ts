@@ -1,7 +1,17 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
+import type { RecordingStatus } from '@shared/schemas/footage';
 import type { Tutorial } from './tutorial';
 
-export type RecordingStatus = 'uploaded' | 'processing' | 'ready' | 'failed';
+export type { RecordingStatus };
 export type ThumbnailInfo = { keys: string[]; atMs: number[]; columns: number; rows: number; perSheet: number; tileWidth: number; tileHeight: number };
 
 /** An uploaded video of a tutorial, with what ffprobe found and the files made from it. */
@@ -27,6 +37,8 @@ export class Recording extends Model<InferAttributes<Recording>, InferCreationAt
   declare previewKey: CreationOptional<string | null>;
   declare posterKey: CreationOptional<string | null>;
   declare thumbnails: CreationOptional<ThumbnailInfo | null>;
+  /** Set every few seconds while a worker processes the recording; an old one means the worker died. */
+  declare leaseUntil: CreationOptional<Date | null>;
   declare transcriptName: CreationOptional<string | null>;
   declare transcriptFormat: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -40,7 +52,13 @@ export class Recording extends Model<InferAttributes<Recording>, InferCreationAt
         originalName: { type: DataTypes.TEXT, allowNull: false },
         mime: { type: DataTypes.TEXT, allowNull: false },
         // BIGINT comes back from pg as a string; files of several GB still fit a JS number exactly.
-        sizeBytes: { type: DataTypes.BIGINT, allowNull: false, get() { return Number(this.getDataValue('sizeBytes')); } },
+        sizeBytes: {
+          type: DataTypes.BIGINT,
+          allowNull: false,
+          get() {
+            return Number(this.getDataValue('sizeBytes'));
+          },
+        },
         sourceKey: { type: DataTypes.TEXT, allowNull: false },
         status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'uploaded' },
         progress: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
@@ -56,6 +74,7 @@ export class Recording extends Model<InferAttributes<Recording>, InferCreationAt
         previewKey: DataTypes.TEXT,
         posterKey: DataTypes.TEXT,
         thumbnails: DataTypes.JSONB,
+        leaseUntil: { type: DataTypes.DATE, allowNull: true },
         transcriptName: DataTypes.TEXT,
         transcriptFormat: DataTypes.TEXT,
         createdAt: DataTypes.DATE,

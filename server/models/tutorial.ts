@@ -1,5 +1,14 @@
-import { DataTypes, Model, type CreationOptional, type ForeignKey, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { TutorialState } from '@shared/schemas/tutorial';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
+import type { TutorialState, UpdateState } from '@shared/schemas/tutorial';
 import type { Studio } from './studio';
 import type { User } from './user';
 
@@ -19,6 +28,19 @@ export class Tutorial extends Model<InferAttributes<Tutorial>, InferCreationAttr
   declare disclosure: CreationOptional<string | null>;
   /** Where the video is published; used by handouts, QR codes and descriptions. */
   declare videoUrl: CreationOptional<string | null>;
+  /** The version readers see (public page, exports, reader's view); null until it is published. */
+  declare liveVersionId: CreationOptional<string | null>;
+  /** The version a coordinator approved, which publishing makes live; null when nothing is approved. */
+  declare approvedVersionId: CreationOptional<string | null>;
+  /** The review state of the changes made since publishing; null when there are none. */
+  declare updateState: CreationOptional<UpdateState | null>;
+  /** The brief it was started from (briefs are the board's assignments). */
+  declare briefId: ForeignKey<string | null>;
+  /** A scheduled publish: when, the zone it was picked in, who set it and the queue job that will do it. */
+  declare publishAt: CreationOptional<Date | null>;
+  declare publishTimeZone: CreationOptional<string | null>;
+  declare publishScheduledById: ForeignKey<string | null>;
+  declare publishJobId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare studio?: NonAttribute<Studio>;
@@ -37,6 +59,12 @@ export class Tutorial extends Model<InferAttributes<Tutorial>, InferCreationAttr
         publishedAt: { type: DataTypes.DATE, allowNull: true },
         disclosure: { type: DataTypes.TEXT, allowNull: true },
         videoUrl: { type: DataTypes.TEXT, allowNull: true },
+        liveVersionId: { type: DataTypes.UUID, allowNull: true },
+        approvedVersionId: { type: DataTypes.UUID, allowNull: true },
+        updateState: { type: DataTypes.TEXT, allowNull: true },
+        publishAt: { type: DataTypes.DATE, allowNull: true },
+        publishTimeZone: { type: DataTypes.TEXT, allowNull: true },
+        publishJobId: { type: DataTypes.TEXT, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,4 +1,5 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { Membership } from './membership';
 
 /** A person who signs in; one account across studios. */
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
@@ -8,6 +9,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare passwordHash: string;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
+  /** The person's roles, loaded with them on each request (`loadUser`), so access checks need no query of their own. */
+  declare memberships?: NonAttribute<Membership[]>;
 
   /** The public face of a person: never the hash. */
   toPublic() {
@@ -18,7 +21,14 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
     User.init(
       {
         id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-        email: { type: DataTypes.TEXT, allowNull: false, unique: true, set(v: string) { this.setDataValue('email', v.trim().toLowerCase()); } },
+        email: {
+          type: DataTypes.TEXT,
+          allowNull: false,
+          unique: true,
+          set(v: string) {
+            this.setDataValue('email', v.trim().toLowerCase());
+          },
+        },
         name: { type: DataTypes.TEXT, allowNull: false },
         passwordHash: { type: DataTypes.TEXT, allowNull: false },
         createdAt: DataTypes.DATE,

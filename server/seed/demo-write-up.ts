@@ -1,28 +1,24 @@
 import type { JSONContent } from '@tiptap/core';
 import { Article, Supply, type Tutorial, type User } from '../models';
 import { draftFor, saveArticle } from '../services/write-up';
-
-const SUPPLIES = [
-  { category: 'cardstock', name: 'Kraft cardstock, 12 x 12 in', quantity: '2 sheets', note: 'Medium weight (about 80 lb cover)', url: 'https://shop.example/kraft-cardstock', sponsored: true, discountCode: 'JUNIPER10' },
-  { category: 'paper', name: 'Patterned paper, 12 x 12 in', quantity: '1 sheet', note: 'A small, directional print', url: 'https://shop.example/botanical-paper', sponsored: true, discountCode: null },
-  { category: 'adhesive', name: 'Strong liquid glue', quantity: '', note: 'A fine nozzle helps on the tabs', url: null, sponsored: false, discountCode: null },
-  { category: 'tool', name: 'Paper trimmer with a scoring blade', quantity: '', note: '', url: null, sponsored: false, discountCode: null },
-  { category: 'tool', name: 'Craft knife and self-healing mat', quantity: '', note: 'For the notches', url: null, sponsored: false, discountCode: null },
-  { category: 'tool', name: 'Circle cutter or compass', quantity: '', note: '', url: null, sponsored: false, discountCode: null },
-  { category: 'tool', name: 'Bulldog clips', quantity: '4', note: 'To hold the wall while the glue grabs', url: null, sponsored: false, discountCode: null },
-];
+import { DEMO_SUPPLIES as SUPPLIES } from './demo-pieces';
 
 const para = (text: string): JSONContent => ({ type: 'paragraph', content: [{ type: 'text', text }] });
 
 /** The maker's light edit of the draft: an intro in their own words, a tip and a caution. */
 function lightlyEdited(draft: JSONContent): JSONContent {
   const content = [...(draft.content ?? [])];
-  content[1] = para('A round box with a wrapped wall and a lid that slips over it: a good first project for a circle cutter, and it holds a small gift or a stack of tags.');
+  content[1] = para(
+    'A round box with a wrapped wall and a lid that slips over it: a good first project for a circle cutter, and it holds a small gift or a stack of tags.',
+  );
   const steps = content.filter((n) => n.type === 'step');
   const wrap = steps.find((s) => JSON.stringify(s).includes('Wrap and glue'));
   wrap?.content?.push({ type: 'tip', content: [para('Glue one strip at a time and let it set before adding the second; the overlap then sits flat.')] });
   const cut = steps.find((s) => JSON.stringify(s).includes('Score and notch'));
-  cut?.content?.push({ type: 'caution', content: [para('Snip the notches with the blade moving away from your fingers, and close the craft knife between cuts.')] });
+  cut?.content?.push({
+    type: 'caution',
+    content: [para('Snip the notches with the blade moving away from your fingers, and close the craft knife between cuts.')],
+  });
   return { ...draft, content };
 }
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { JSONContent } from '@tiptap/core';
-import { Chapter, Membership, PieceRow, Recording, Still, Studio, Tutorial } from '@server/models';
+import { Chapter, Comment, CraftClass, Membership, PieceRow, Recording, StateChange, Still, Studio, Tutorial } from '@server/models';
 import { draftFor } from '@server/services/write-up';
 import { DEMO_STUDIO, seedDemo } from './index';
 import '../../tests/harness/app';
@@ -12,11 +12,40 @@ describe('the demo seed', () => {
     // Only the demo studio's rows: other test files write to the same database at the same time.
     const counts = async () => {
       const ids = (await Tutorial.findAll({ where: { studioId: studio!.id }, attributes: ['id'] })).map((t) => t.id);
-      return [await Membership.count({ where: { studioId: studio!.id } }), ids.length, await PieceRow.count({ where: { tutorialId: ids } }), await Recording.count({ where: { tutorialId: ids } })];
+      return [
+        await Membership.count({ where: { studioId: studio!.id } }),
+        ids.length,
+        await PieceRow.count({ where: { tutorialId: ids } }),
+        await Recording.count({ where: { tutorialId: ids } }),
+        await CraftClass.count({ where: { tutorialId: ids } }),
+        await StateChange.count({ where: { tutorialId: ids } }),
+        await Comment.count({ where: { tutorialId: ids } }),
+      ];
     };
     const before = await counts();
     await seedDemo();
     expect(await counts()).toEqual(before);
+
+    // a review trail: the published box went draft → in review → approved → published; the card waits in review with one open comment
+    const bySlug = async (slug: string) => (await Tutorial.findOne({ where: { studioId: studio!.id, slug } }))!;
+    const boxMoves = await StateChange.findAll({ where: { tutorialId: (await bySlug('round-keepsake-box')).id }, order: [['createdAt', 'ASC']] });
+    expect(boxMoves.map((m) => [m.fromState, m.toState])).toEqual([
+      ['draft', 'in_review'],
+      ['in_review', 'approved'],
+      ['approved', 'published'],
+    ]);
+    // what the box holds is what readers see: a published version, no update pending
+    const box = await bySlug('round-keepsake-box');
+    expect(box.liveVersionId).not.toBeNull();
+    expect(box.updateState).toBeNull();
+    const card = await bySlug('gatefold-birthday-card');
+    expect((await StateChange.findAll({ where: { tutorialId: card.id } })).map((m) => m.toState)).toEqual([card.state]);
+    expect(await Comment.count({ where: { tutorialId: card.id, resolvedAt: null } })).toBe(1);
+
+    // one class of the published tutorial, in the future, so the Classes page and registration have something to show
+    const demoClass = await CraftClass.findOne({ where: { studioId: studio!.id } });
+    expect(demoClass!.startsAt.getTime()).toBeGreaterThan(Date.now());
+    expect(demoClass!.timeZone).toBe('America/Chicago');
 
     const tutorial = await Tutorial.findOne({ where: { studioId: studio!.id, slug: 'round-keepsake-box' } });
     const rec = await Recording.findOne({ where: { tutorialId: tutorial!.id } });
@@ -34,5 +63,5 @@ describe('the demo seed', () => {
       expect(step.attrs?.atMs).toBe(from);
       expect(placed?.attrs?.stillId ?? null).toBe(expected?.id ?? null);
     });
-  }, 180_000);
+  }, 420_000); // it encodes the demo video with ffmpeg: slow on a busy machine
 });

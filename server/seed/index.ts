@@ -4,6 +4,9 @@ import { hashPassword } from '../services/passwords';
 import { seedDemoFootage } from './demo-footage';
 import { seedDemoCutList } from './demo-cut-list';
 import { seedDemoWriteUp } from './demo-write-up';
+import { seedDemoReview } from './demo-review';
+import { seedDemoClass } from './demo-class';
+import { liveContent } from '../services/versions/versions';
 
 export const DEMO_PASSWORD = 'cardwright-demo';
 export const DEMO_STUDIO = { name: 'Juniper Lane Paper Co.', slug: 'juniper-lane' };
@@ -32,7 +35,11 @@ export async function seedDemo(log: (s: string) => void = () => {}): Promise<voi
   await sequelize.transaction(async (transaction) => {
     for (const p of DEMO_PEOPLE) {
       const [user] = await User.findOrCreate({ where: { email: p.email }, defaults: { email: p.email, name: p.name, passwordHash }, transaction });
-      await Membership.findOrCreate({ where: { userId: user.id, studioId: studio.id }, defaults: { userId: user.id, studioId: studio.id, role: p.role }, transaction });
+      await Membership.findOrCreate({
+        where: { userId: user.id, studioId: studio.id },
+        defaults: { userId: user.id, studioId: studio.id, role: p.role },
+        transaction,
+      });
       people[p.role] = user;
     }
   });
@@ -60,5 +67,20 @@ export async function seedDemo(log: (s: string) => void = () => {}): Promise<voi
   await seedDemoFootage(made['round-keepsake-box'], people.maker, log);
   await seedDemoCutList(made['round-keepsake-box']);
   await seedDemoWriteUp(made['round-keepsake-box'], people.maker);
+  await seedDemoClass(made['round-keepsake-box'], people.coordinator);
+  await seedDemoReview(made, people);
+  await settlePublishedDemo(made['round-keepsake-box']);
   log(createdStudio ? `Seeded the demo studio "${studio.name}".` : 'Demo data already present.');
+}
+
+/**
+ * The box is made published and filled in afterwards, and each of those writes starts an update
+ * (DESIGN.md T4). On first seeding, what it holds is what readers see: keep that as its published
+ * version, with no update pending. A box already seeded keeps whatever people did with it.
+ */
+async function settlePublishedDemo(box: Tutorial): Promise<void> {
+  await box.reload();
+  if (box.liveVersionId) return;
+  await box.update({ updateState: null });
+  await liveContent(box);
 }

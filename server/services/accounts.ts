@@ -1,30 +1,60 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
-import type { SignUpInput } from '@shared/schemas/auth';
+import type { InvitationPreviewDto, SignUpInput, StudioMembershipDto } from '@shared/schemas/auth';
 import { Invitation, Membership, PasswordReset, Studio, User, sequelize } from '../models';
-import { HttpError } from '../lib/http-error';
+import { BadRequestError, ConflictError, ForbiddenError, GoneError, InvalidInputError, NotFoundError, NotSignedInError } from '../lib/errors';
 import { config } from '../config';
-import { hashPassword } from './passwords';
+import { retryOnUnique, violatedConstraint } from '../lib/unique';
+import { studioAbilities } from '../policies';
+import { burnPasswordCheck, hashPassword, verifyPassword } from './passwords';
 import { hashToken, newToken } from './tokens';
 import { linkMail, sendMail } from './mail';
 import { uniqueStudioSlug } from './studios';
+
+/** Unique indexes a sign-up can run into (migration create-accounts: PostgreSQL's default names). */
+const USER_EMAIL = 'users_email_key';
+const STUDIO_SLUG = 'studios_slug_key';
 
 const RESET_TTL_MS = 60 * 60_000;
 const INVITE_TTL_MS = 14 * 24 * 60 * 60_000;
 
 /** The studios a person belongs to, with their role in each. */
-export async function studiosOf(userId: string) {
+export async function studiosOf(userId: string): Promise<StudioMembershipDto[]> {
   const ms = await Membership.findAll({ where: { userId }, include: [{ model: Studio, as: 'studio' }], order: [['createdAt', 'ASC']] });
-  return ms.map((m) => ({ id: m.studio!.id, name: m.studio!.name, slug: m.studio!.slug, role: m.role }));
+  return ms.map((m) => ({
+    id: m.studio!.id,
+    name: m.studio!.name,
+    slug: m.studio!.slug,
+    role: m.role,
+    abilities: (({ listClasses, readBoard }) => ({ listClasses, readBoard }))(studioAbilities({ userId, role: m.role })),
+  }));
+}
+
+/**
+ * The account for an e-mail and password; 401 otherwise. An unknown address costs the same hash
+ * time as a known one, so timing does not tell who has an account.
+ */
+export async function signIn(email: string, password: string): Promise<User> {
+  const user = await User.findOne({ where: { email } });
+  const ok = user ? await verifyPassword(password, user.passwordHash) : (await burnPasswordCheck(password), false);
+  if (!user || !ok) throw new NotSignedInError('That e-mail and password do not match an account');
+  return user;
 }
 
 /** Finds an invitation by its link token that can still be used. */
 export async function usableInvitation(token: string) {
   const inv = await Invitation.findOne({ where: { tokenHash: hashToken(token) }, include: [{ model: Studio, as: 'studio' }] });
-  if (!inv) throw new HttpError(404, 'This invitation link is not valid');
-  if (inv.acceptedAt) throw new HttpError(410, 'This invitation has already been used');
-  if (inv.expiresAt.getTime() < Date.now()) throw new HttpError(410, 'This invitation has expired; ask for a new one');
+  if (!inv) throw NotFoundError.saying('This invitation link is not valid');
+  if (inv.acceptedAt) throw new GoneError('This invitation has already been used');
+  if (inv.expiresAt.getTime() < Date.now()) throw new GoneError('This invitation has expired; ask for a new one');
   return inv;
+}
+
+/** What the invitation page shows before accepting: who invites, as what, and whether the address already has an account. */
+export async function invitationPreview(token: string): Promise<InvitationPreviewDto> {
+  const inv = await usableInvitation(token);
+  const hasAccount = Boolean(await User.findOne({ where: { email: inv.email }, attributes: ['id'] }));
+  return { email: inv.email, role: inv.role, studio: { id: inv.studio!.id, name: inv.studio!.name }, hasAccount, expiresAt: inv.expiresAt.toISOString() };
 }
 
 /**
@@ -32,27 +62,48 @@ export async function usableInvitation(token: string) {
  * with one, they join the inviting studio with the offered role.
  */
 export async function signUp(input: SignUpInput): Promise<User> {
-  const existing = await User.findOne({ where: { email: input.email } });
-  if (existing) throw new HttpError(409, 'An account with this e-mail already exists; sign in or reset the password', { issues: [{ path: 'email', message: 'Already registered' }] });
+  const alreadyRegistered = () =>
+    new ConflictError('An account with this e-mail already exists; sign in or reset the password', {
+      issues: [{ path: 'email', message: 'Already registered' }],
+    });
+  if (await User.findOne({ where: { email: input.email }, attributes: ['id'] })) throw alreadyRegistered();
   const invitation = input.invitationToken ? await usableInvitation(input.invitationToken) : null;
+  if (invitation && invitation.email.toLowerCase() !== input.email.toLowerCase())
+    throw new InvalidInputError(
+      [{ path: 'email', message: `The invitation was sent to ${invitation.email}` }],
+      `This invitation was sent to ${invitation.email}; create the account with that address`,
+    );
   const passwordHash = await hashPassword(input.password);
-  return sequelize.transaction(async (transaction) => {
-    const user = await User.create({ email: input.email, name: input.name, passwordHash }, { transaction });
-    if (invitation) {
-      await Membership.create({ userId: user.id, studioId: invitation.studioId, role: invitation.role }, { transaction });
-      await invitation.update({ acceptedAt: new Date() }, { transaction });
-    } else {
-      const name = input.studioName ?? `${input.name}'s studio`;
-      const studio = await Studio.create({ name, slug: await uniqueStudioSlug(name, transaction) }, { transaction });
-      await Membership.create({ userId: user.id, studioId: studio.id, role: 'owner' }, { transaction });
-    }
-    return user;
-  });
+  // Two sign-ups at the same moment: the same e-mail is a conflict in words; the same studio name
+  // picks the next free address on a second try.
+  const create = () =>
+    sequelize.transaction(async (transaction) => {
+      const user = await User.create({ email: input.email, name: input.name, passwordHash }, { transaction });
+      if (invitation) {
+        await Membership.create({ userId: user.id, studioId: invitation.studioId, role: invitation.role }, { transaction });
+        await invitation.update({ acceptedAt: new Date() }, { transaction });
+        await closeOtherInvitations(invitation, transaction);
+      } else {
+        const name = input.studioName ?? `${input.name}'s studio`;
+        const studio = await Studio.create({ name, slug: await uniqueStudioSlug(name, transaction) }, { transaction });
+        await Membership.create({ userId: user.id, studioId: studio.id, role: 'owner' }, { transaction });
+      }
+      return user;
+    });
+  try {
+    return await retryOnUnique([STUDIO_SLUG], create);
+  } catch (e) {
+    if (violatedConstraint(e) === USER_EMAIL) throw alreadyRegistered();
+    throw e;
+  }
 }
 
 /** Adds the signed-in person to the inviting studio (or changes their role there to the offered one). */
 export async function acceptInvitation(user: User, token: string) {
   const inv = await usableInvitation(token);
+  // A link that reached someone else (a forward, a shared inbox) does not let them in.
+  if (user.email.toLowerCase() !== inv.email.toLowerCase())
+    throw new ForbiddenError(`This invitation was sent to ${inv.email}; sign in with that address to accept it`);
   await sequelize.transaction(async (transaction) => {
     const m = await Membership.findOne({ where: { userId: user.id, studioId: inv.studioId }, transaction });
     if (m) {
@@ -61,8 +112,18 @@ export async function acceptInvitation(user: User, token: string) {
       await Membership.create({ userId: user.id, studioId: inv.studioId, role: inv.role }, { transaction });
     }
     await inv.update({ acceptedAt: new Date() }, { transaction });
+    await closeOtherInvitations(inv, transaction);
   });
   return { studioId: inv.studioId };
+}
+
+/**
+ * Starts a reset in the background and returns at once: the caller answers before any look-up,
+ * so the answer takes as long for an unknown address as for a known one. A failure (mail server
+ * down) is logged; the person can ask again.
+ */
+export function startPasswordReset(email: string): void {
+  requestPasswordReset(email).catch((e: unknown) => console.error('[password reset]', e));
 }
 
 /**
@@ -78,7 +139,11 @@ export async function requestPasswordReset(email: string): Promise<void> {
     linkMail({
       to: user.email,
       subject: 'Reset your Cardwright password',
-      lines: [`Hello ${user.name},`, 'Someone asked to reset the password of your Cardwright account. The link works once, for one hour.', 'If it was not you, ignore this message; nothing changes.'],
+      lines: [
+        `Hello ${user.name},`,
+        'Someone asked to reset the password of your Cardwright account. The link works once, for one hour.',
+        'If it was not you, ignore this message; nothing changes.',
+      ],
       link: `${config.publicUrl}/reset/${token}`,
       linkLabel: 'Choose a new password',
     }),
@@ -89,39 +154,68 @@ export async function requestPasswordReset(email: string): Promise<void> {
 export async function resetPassword(token: string, password: string): Promise<User> {
   const reset = await PasswordReset.findOne({ where: { tokenHash: hashToken(token) } });
   if (!reset || reset.usedAt || reset.expiresAt.getTime() < Date.now()) {
-    throw new HttpError(400, 'This reset link is not valid any more; ask for a new one', { issues: [{ path: 'token', message: 'Expired or already used' }] });
+    throw new InvalidInputError([{ path: 'token', message: 'Expired or already used' }], 'This reset link is not valid any more; ask for a new one');
   }
   const user = await User.findByPk(reset.userId);
-  if (!user) throw new HttpError(400, 'This reset link is not valid any more');
+  if (!user) throw new BadRequestError('This reset link is not valid any more');
   const passwordHash = await hashPassword(password);
   await sequelize.transaction(async (transaction) => {
     await user.update({ passwordHash }, { transaction });
     await PasswordReset.update({ usedAt: new Date() }, { where: { userId: user.id, usedAt: { [Op.is]: null } }, transaction });
+    // Whoever knew the old password is signed out everywhere; the reset starts one fresh session.
+    await endSessionsOf(user.id, transaction);
   });
   return user;
 }
 
-/** Creates an invitation and mails its link. */
-export async function invite(opts: { studio: Studio; email: string; role: Role; invitedBy: User }) {
-  const member = await User.findOne({ where: { email: opts.email }, include: [{ model: Membership, as: 'memberships', where: { studioId: opts.studio.id }, required: true }] });
-  if (member) throw new HttpError(409, `${opts.email} is already a member of this studio`, { issues: [{ path: 'email', message: 'Already a member' }] });
+/** Ends every stored session of a person (express-session keeps them in the `session` table). */
+export async function endSessionsOf(userId: string, transaction?: Transaction): Promise<void> {
+  await sequelize.query(`DELETE FROM "session" WHERE sess->>'userId' = :userId`, { replacements: { userId }, transaction });
+}
+
+/**
+ * Invites an address to a studio and mails the link. An address with an invitation not yet accepted
+ * gets that one sent again (a new link, the role now chosen, 14 days from now) instead of a second
+ * row; older links to it stop working. `resent` says which happened.
+ */
+export async function invite(opts: { studio: Studio; email: string; role: Role; invitedBy: User }): Promise<{ invitation: Invitation; resent: boolean }> {
+  const member = await User.findOne({
+    where: { email: opts.email },
+    include: [{ model: Membership, as: 'memberships', where: { studioId: opts.studio.id }, required: true }],
+  });
+  if (member) throw new ConflictError(`${opts.email} is already a member of this studio`, { issues: [{ path: 'email', message: 'Already a member' }] });
   const { token, hash } = newToken();
-  const inv = await Invitation.create({
-    studioId: opts.studio.id,
-    email: opts.email,
-    role: opts.role,
-    tokenHash: hash,
-    invitedById: opts.invitedBy.id,
-    expiresAt: new Date(Date.now() + INVITE_TTL_MS),
+  const offer = { role: opts.role, tokenHash: hash, invitedById: opts.invitedBy.id, expiresAt: new Date(Date.now() + INVITE_TTL_MS) };
+  const { inv, resent } = await sequelize.transaction(async (transaction) => {
+    // The studio row's lock makes two invitations of one address at the same moment one after the other.
+    await Studio.findByPk(opts.studio.id, { attributes: ['id'], lock: transaction.LOCK.UPDATE, transaction });
+    const open = await Invitation.findAll({
+      where: { studioId: opts.studio.id, email: opts.email.trim().toLowerCase(), acceptedAt: { [Op.is]: null } },
+      order: [['createdAt', 'DESC']],
+      transaction,
+    });
+    const [kept, ...older] = open;
+    if (older.length) await Invitation.destroy({ where: { id: older.map((i) => i.id) }, transaction });
+    if (kept) return { inv: await kept.update(offer, { transaction }), resent: true };
+    return { inv: await Invitation.create({ studioId: opts.studio.id, email: opts.email, ...offer }, { transaction }), resent: false };
   });
   await sendMail(
     linkMail({
       to: opts.email,
       subject: `${opts.invitedBy.name} invited you to ${opts.studio.name} on Cardwright`,
-      lines: [`Hello,`, `${opts.invitedBy.name} invited you to join ${opts.studio.name} on Cardwright as ${opts.role}.`, 'The invitation is valid for 14 days.'],
+      lines: [
+        `Hello,`,
+        `${opts.invitedBy.name} invited you to join ${opts.studio.name} on Cardwright as ${opts.role}.`,
+        'The invitation is valid for 14 days.',
+      ],
       link: `${config.publicUrl}/invite/${token}`,
       linkLabel: 'Accept the invitation',
     }),
   );
-  return inv;
+  return { invitation: inv, resent };
+}
+
+/** Accepting one invitation settles the address's others to the same studio (resent copies, class links). */
+function closeOtherInvitations(inv: Invitation, transaction: Transaction) {
+  return Invitation.destroy({ where: { studioId: inv.studioId, email: inv.email, acceptedAt: { [Op.is]: null }, id: { [Op.ne]: inv.id } }, transaction });
 }

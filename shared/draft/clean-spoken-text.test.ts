@@ -53,12 +53,20 @@ describe('stutters and repeats', () => {
 
 describe('sentences', () => {
   it('gives each sentence a capital and a full stop (common practice of written English)', () => {
-    expect(spokenSentences('first score the card\nthen fold it in half\nis it straight?')).toEqual(['First score the card.', 'Then fold it in half.', 'Is it straight?']);
+    expect(spokenSentences('first score the card\nthen fold it in half\nis it straight?')).toEqual([
+      'First score the card.',
+      'Then fold it in half.',
+      'Is it straight?',
+    ]);
   });
 
   it('splits a long unpunctuated run before a new-topic word', () => {
-    const run = 'what I do is I take my strip and I wrap it around the circle and then I glue it down and so now we can move on to the lid which is a bit bigger';
-    expect(spokenSentences(run)).toEqual(['What I do is I take my strip and I wrap it around the circle and then I glue it down.', 'Now we can move on to the lid which is a bit bigger.']);
+    const run =
+      'what I do is I take my strip and I wrap it around the circle and then I glue it down and so now we can move on to the lid which is a bit bigger';
+    expect(spokenSentences(run)).toEqual([
+      'What I do is I take my strip and I wrap it around the circle and then I glue it down.',
+      'Now we can move on to the lid which is a bit bigger.',
+    ]);
   });
 
   it('capitalises "I" and drops sentences with nothing left in them', () => {
@@ -101,5 +109,19 @@ describe('measurements in display form', () => {
 
   it('finds a measurement split by a pause', () => {
     expect(cleanSpokenText('cut it four and a quarter by\nfive and a half inches')).toBe('Cut it 4 1/4 x 5 1/2 in.');
+  });
+});
+
+// Our own lines: a maker repeating a size to be sure it was heard.
+describe('spoken repeats of a measurement', () => {
+  it.each([
+    ['cut it ten and a half, ten and a half inches long', 'Cut it 10 1/2 in long.'],
+    ['the strip is four by six, four by six inches', 'The strip is 4 x 6 in.'],
+    ["score at one inch, that's one inch from the edge", 'Score at 1 in from the edge.'],
+  ])('%j', (spoken, written) => expect(cleanSpokenText(spoken)).toBe(written));
+
+  it('keeps two equal values that are two different things', () => {
+    expect(cleanSpokenText('cut one inch strips and score them at one inch')).toBe('Cut 1 in strips and score them at 1 in.');
+    expect(cleanSpokenText('two panels, four by six and four by six')).toBe('Two panels, 4 x 6 in and 4 x 6 in.');
   });
 });

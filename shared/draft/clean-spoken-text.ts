@@ -48,9 +48,7 @@ function stripFillers(text: string): string {
 }
 
 function stripStutters(text: string): string {
-  return text.replace(FRAGMENT, (match, frag: string, next: string) =>
-    next.toLowerCase().startsWith(frag.toLowerCase()) || frag.length <= 3 ? '' : match,
-  );
+  return text.replace(FRAGMENT, (match, frag: string, next: string) => (next.toLowerCase().startsWith(frag.toLowerCase()) || frag.length <= 3 ? '' : match));
 }
 
 function core(word: string): string {
@@ -110,7 +108,10 @@ export function tidySpokenWords(text: string): string {
     .replace(/\[[^\]\n]*\]|[\u266A\u266B]/g, ' ')
     .replace(/\r\n?/g, '\n');
   const lines = tidyPunctuation(stripStutters(stripFillers(normal))).split('\n');
-  return lines.map((l) => tidyPunctuation(stripRepeats(l))).filter(Boolean).join('\n');
+  return lines
+    .map((l) => tidyPunctuation(stripRepeats(l)))
+    .filter(Boolean)
+    .join('\n');
 }
 
 const SPLIT_BEFORE = /\s(?=(?:so|now|next|okay|alright)\s)/gi;
@@ -135,7 +136,10 @@ function splitLong(sentence: string): string[] {
 }
 
 function finish(sentence: string): string | null {
-  let s = sentence.trim().replace(/^[,;:\-\s]+/, '').replace(/[,;:\-\s]+$/, '');
+  let s = sentence
+    .trim()
+    .replace(/^[,;:\-\s]+/, '')
+    .replace(/[,;:\-\s]+$/, '');
   // Spoken openers that a written sentence does without.
   s = s.replace(/^(?:and so|and|so)\b[,]?\s+(?=\S)/i, '').replace(/[\s,]+(?:and so|and then|and|so|but|or)$/i, '');
   if (!/[\p{L}\p{N}]/u.test(s) || EMPTY_SENTENCE.test(s.replace(/[.!?]+$/, ''))) return null;
@@ -152,10 +156,11 @@ export function spokenSentences(text: string, opts: CleanOptions = {}): string[]
   const out: string[] = [];
   for (const line of s.split('\n')) {
     // A full stop followed by a space ends a sentence; "2.5 mm" has no space after its point.
-    for (const raw of line.split(/(?<=[.!?])\s+/)) for (const part of splitLong(raw)) {
-      const done = finish(part);
-      if (done) out.push(done);
-    }
+    for (const raw of line.split(/(?<=[.!?])\s+/))
+      for (const part of splitLong(raw)) {
+        const done = finish(part);
+        if (done) out.push(done);
+      }
   }
   return out;
 }

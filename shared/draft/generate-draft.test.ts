@@ -58,14 +58,15 @@ describe('generateDraft', () => {
     expect(draft.content![5]).toEqual({ type: 'cutList', attrs: { units: 'both' } });
   });
 
-  it('keeps an intro chapter as a step too: one step per chapter (W2)', () => {
-    expect(words(draft.content![1]!)).toBe('Here is how to make it, step by step: the supplies, the cut list, then 4 steps.');
-    expect(words(steps(draft)[0]!.content![1]!)).toBe("Hi everyone welcome back. Today we're making a hexagon treat box.");
+  it('moves the greeting out and "today we\'re making" into the intro; an intro chapter with nothing else is no step', () => {
+    expect(words(draft.content![1]!)).toBe(
+      "Today we're making a hexagon treat box. Here is how to make it, step by step: the supplies, the cut list, then 3 steps.",
+    );
+    expect(JSON.stringify(draft)).not.toMatch(/welcome back/i);
   });
 
   it('makes one step per chapter, in time order, with its time and chapter', () => {
     expect(steps(draft).map((s) => [words(s.content![0]!), s.attrs!.atMs, s.attrs!.chapterId])).toEqual([
-      ['Intro', 0, 'ch-intro'],
       ['Cut the pieces', 15_000, 'ch-cut'],
       ['Score the walls', 60_000, 'ch-score'],
       ['Assemble the box', 120_000, 'ch-glue'],
@@ -73,8 +74,10 @@ describe('generateDraft', () => {
   });
 
   it('cleans each step’s words and shows measurements in display form', () => {
-    const [, cut, score] = steps(draft);
-    expect(cut!.content!.filter((n) => n.type === 'paragraph').map(words)).toEqual(['First cut your cardstock 10 9/16 x 4 1/4 in. Then the lid is a 3 in circle.']);
+    const [cut, score] = steps(draft);
+    expect(cut!.content!.filter((n) => n.type === 'paragraph').map(words)).toEqual([
+      'First cut your cardstock 10 9/16 x 4 1/4 in. Then the lid is a 3 in circle.',
+    ]);
     // A pause of 700 ms or more ends a sentence; at most four sentences make a paragraph.
     expect(score!.content!.filter((n) => n.type === 'paragraph').map(words)).toEqual([
       'Score the strip at 1 in, 2 in and 3 in. Just press firmly. Fold each line. Crease it well.',
@@ -84,8 +87,15 @@ describe('generateDraft', () => {
 
   it('places the first still taken within each chapter, or none', () => {
     const stillOf = (s: JSONContent) => s.content!.find((n) => n.type === 'still')?.attrs;
-    const [, cut, score, glue] = steps(draft);
-    expect(stillOf(cut!)).toEqual({ stillId: 'st-2', src: '/media/stills/st-2.jpg', alt: 'Cardstock on the trimmer', caption: 'Cutting the base', width: 1280, height: 720 });
+    const [cut, score, glue] = steps(draft);
+    expect(stillOf(cut!)).toEqual({
+      stillId: 'st-2',
+      src: '/media/stills/st-2.jpg',
+      alt: 'Cardstock on the trimmer',
+      caption: 'Cutting the base',
+      width: 1280,
+      height: 720,
+    });
     expect(stillOf(score!)).toBeUndefined();
     // A still at the chapter's first instant is inside it; an unsafe address is passed over.
     expect(stillOf(glue!)).toEqual({ stillId: 'st-8', src: '/media/stills/st-8.jpg', alt: 'Assemble the box', caption: '', width: null, height: null });
@@ -99,6 +109,38 @@ describe('generateDraft', () => {
   it('is the same every time, whatever order the inputs come in', () => {
     const shuffled = { ...INPUT, chapters: [...INPUT.chapters].reverse(), cues: [...INPUT.cues].reverse(), stills: [...INPUT.stills].reverse() };
     expect(generateDraft(shuffled)).toEqual(draft);
+  });
+});
+
+// Our own opening and closing lines, of the kinds makers say on camera (common practice).
+describe('greetings and sign-offs', () => {
+  const draft = generateDraft({
+    title: 'Round keepsake box',
+    chapters: [
+      { id: 'a', title: 'Introduction', startMs: 0 },
+      { id: 'b', title: 'Cut eighteen inch strips', startMs: 10_000 },
+      { id: 'c', title: 'Finish', startMs: 20_000 },
+    ],
+    cues: [
+      { startMs: 0, endMs: 4000, text: 'Hi friends, welcome back to the studio. Today we are making a round box.' },
+      { startMs: 4000, endMs: 8000, text: 'You will need kraft cardstock.' },
+      { startMs: 10_000, endMs: 14_000, text: 'Cut two strips eighteen inches long.' },
+      { startMs: 20_000, endMs: 24_000, text: 'Glue the lid on. Happy crafting! Thanks so much for watching, and subscribe for more.' },
+    ],
+    stills: [],
+  });
+  it('keeps the greeting out of the steps and puts the project line in the intro', () => {
+    expect(words(draft.content![1]!)).toMatch(/^Today we are making a round box\. Here is how/);
+    expect(words(steps(draft)[0]!.content![1]!)).toBe('You will need kraft cardstock.');
+  });
+  it('ends the last step at its last instruction; a kind sign-off closes the page, "thanks for watching" stays in the video', () => {
+    const last = steps(draft)[2]!;
+    expect(words(last.content![1]!)).toBe('Glue the lid on.');
+    expect(words(draft.content![draft.content!.length - 1]!)).toBe('Happy crafting!');
+    expect(JSON.stringify(draft)).not.toMatch(/watching|subscribe/i);
+  });
+  it('writes headings with measurements in display form (18 in, not eighteen inches)', () => {
+    expect(words(steps(draft)[1]!.content![0]!)).toBe('Cut 18 in strips');
   });
 });
 
@@ -137,13 +179,25 @@ describe('generateDraft without an intro chapter', () => {
   });
 
   it('keeps a lone welcome chapter as its step', () => {
-    const one = generateDraft({ title: 'Tag', chapters: [{ id: 'x', title: 'Welcome', startMs: 0 }], cues: [{ startMs: 0, endMs: 1000, text: 'punch the hole' }], stills: [] });
+    const one = generateDraft({
+      title: 'Tag',
+      chapters: [{ id: 'x', title: 'Welcome', startMs: 0 }],
+      cues: [{ startMs: 0, endMs: 1000, text: 'punch the hole' }],
+      stills: [],
+    });
     expect(steps(one).map((s) => words(s.content![0]!))).toEqual(['Welcome']);
   });
 
   it('makes a single step from the whole transcript when there are no chapters', () => {
-    const none = generateDraft({ title: 'Round gift box', chapters: [], cues: [{ startMs: 0, endMs: 1000, text: 'wrap the strip round the base' }], stills: [] });
-    expect(steps(none).map((s) => [words(s.content![0]!), s.attrs!.chapterId, words(s.content![1]!)])).toEqual([['Round gift box', null, 'Wrap the strip round the base.']]);
+    const none = generateDraft({
+      title: 'Round gift box',
+      chapters: [],
+      cues: [{ startMs: 0, endMs: 1000, text: 'wrap the strip round the base' }],
+      stills: [],
+    });
+    expect(steps(none).map((s) => [words(s.content![0]!), s.attrs!.chapterId, words(s.content![1]!)])).toEqual([
+      ['Round gift box', null, 'Wrap the strip round the base.'],
+    ]);
     expect(validateDoc(none).ok).toBe(true);
   });
 });

@@ -43,7 +43,7 @@ describe('editor commands (headless editor in happy-dom)', () => {
     const e = make();
     expect(e.commands.insertStep({ title: 'Fold the flaps', atMs: 5000 })).toBe(true);
     const step = e.getJSON().content!.find((n) => n.type === 'step')!;
-    expect(step.attrs).toEqual({ atMs: 5000, chapterId: null });
+    expect(step.attrs).toEqual({ id: expect.stringMatching(/^s[0-9a-f]{12}$/), atMs: 5000, chapterId: null });
     expect(step.content!.map((n) => n.type)).toEqual(['stepTitle', 'paragraph']);
     expect(validateDoc(e.getJSON()).ok).toBe(true);
   });

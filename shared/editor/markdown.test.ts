@@ -67,7 +67,20 @@ Thanks for making it with me \\*and\\* sharing it!
 const CTX: RenderContext = {
   videoUrl: 'https://video.example/v/round',
   precision: 16,
-  pieces: [{ name: 'Wall | strip', material: 'Kraft cardstock', quantity: 1, shape: 'rect', width: '10 9/16 in', height: '2 in', widthMm: 268.2875, heightMm: 50.8, scoreLines: ['1/2 in'], notes: '' }],
+  pieces: [
+    {
+      name: 'Wall | strip',
+      material: 'Kraft cardstock',
+      quantity: 1,
+      shape: 'rect',
+      width: '10 9/16 in',
+      height: '2 in',
+      widthMm: 268.2875,
+      heightMm: 50.8,
+      scoreLines: ['1/2 in'],
+      notes: '',
+    },
+  ],
   supplies: [{ category: 'cardstock', name: 'Kraft cardstock', quantity: '1 sheet', url: 'https://shop.example/kraft', sponsored: true }],
 };
 
@@ -101,7 +114,14 @@ describe('markdownToDoc', () => {
   it('reads tips, cautions, photos and the live-list markers', () => {
     expect(find(doc, 'tip')).toHaveLength(1);
     expect(find(doc, 'caution')[0]!.content![1]!.content!.map((c) => c.text)).toEqual(['Use ', 'lots of', ' a thin line of glue.']);
-    expect(find(doc, 'still')[0]!.attrs).toEqual({ stillId: null, src: '/media/stills/c1.jpg', alt: 'Two circles on the cutting mat', caption: 'The base and the lid', width: null, height: null });
+    expect(find(doc, 'still')[0]!.attrs).toEqual({
+      stillId: null,
+      src: '/media/stills/c1.jpg',
+      alt: 'Two circles on the cutting mat',
+      caption: 'The base and the lid',
+      width: null,
+      height: null,
+    });
     expect(find(doc, 'cutList')[0]!.attrs).toEqual({ units: 'both' });
     expect(find(doc, 'supplyList')[0]!.attrs).toEqual({ grouped: true });
     // A plain quote stays a quote.
@@ -110,7 +130,10 @@ describe('markdownToDoc', () => {
 
   it('ignores whatever sits between the markers: the rows live in the Cut list section', () => {
     const d = markdownToDoc('<!-- cut-list units="mm" -->\n\n| Piece | Qty |\n| --- | --- |\n| Lid | 2 |\n\n<!-- /cut-list -->\n\nAfter.\n');
-    expect(d.content).toEqual([{ type: 'cutList', attrs: { units: 'mm' } }, { type: 'paragraph', content: [{ type: 'text', text: 'After.' }] }]);
+    expect(d.content).toEqual([
+      { type: 'cutList', attrs: { units: 'mm' } },
+      { type: 'paragraph', content: [{ type: 'text', text: 'After.' }] },
+    ]);
   });
 
   it('drops raw HTML and unsafe addresses (markdown-it reads it; nothing is passed on as markup)', () => {
@@ -122,7 +145,11 @@ describe('markdownToDoc', () => {
         type: 'paragraph',
         content: [
           { type: 'text', text: 'Hello there [x](javascript:alert(1)) ' },
-          { type: 'text', text: 'y', marks: [{ type: 'link', attrs: { href: 'https://ok.example', target: null, rel: 'noopener noreferrer nofollow', class: null, title: null } }] },
+          {
+            type: 'text',
+            text: 'y',
+            marks: [{ type: 'link', attrs: { href: 'https://ok.example', target: null, rel: 'noopener noreferrer nofollow', class: null, title: null } }],
+          },
         ],
       },
       // markdown-it refuses the script address, so the image stays as its literal words.
@@ -164,9 +191,16 @@ describe('docToMarkdown', () => {
     const html = new MarkdownIt().render(out);
     expect(out).toContain('| Wall \\| strip | Kraft cardstock | 1 | 10 9/16 x 2 in (268.3 x 50.8 mm) | 1/2 in |');
     expect(html).toContain('<td>Wall | strip</td>');
-    expect(html).toContain('<a href="https://shop.example/kraft">Kraft cardstock</a> (1 sheet)');
+    expect(html).toContain('<a href="https://shop.example/kraft">Kraft cardstock</a> (sponsored link) (1 sheet)');
     expect(html).toMatch(/<em>Some links in this tutorial are sponsored/);
     expect(html).toContain('<h3>Step 1: Cut the base and lid</h3>');
+  });
+
+  it('keeps two lists in a row apart: the second takes the other marker (CommonMark 0.31.2, 5.3: a new bullet or delimiter starts a new list)', () => {
+    const md = '- a\n- b\n\n\n* c\n\n1. one\n\n\n2) two\n';
+    const doc = markdownToDoc(md);
+    expect(doc.content!.map((n) => n.type)).toEqual(['bulletList', 'bulletList', 'orderedList', 'orderedList']);
+    expect(markdownToDoc(docToMarkdown(doc))).toEqual(doc);
   });
 
   it('escapes Markdown syntax in text so it reads back as the same words', () => {
@@ -174,5 +208,55 @@ describe('docToMarkdown', () => {
     const doc: JSONContent = { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: words }] }] };
     const back = markdownToDoc(docToMarkdown(doc));
     expect(back.content![0]!.content).toEqual([{ type: 'text', text: words }]);
+  });
+});
+
+describe('docToMarkdown: link addresses as a Markdown reader sees them', () => {
+  // A reader that trusts every address: it shows what the written Markdown itself points at.
+  const laxReader = new MarkdownIt();
+  laxReader.validateLink = () => true;
+  const hrefs = (md: string) => [...laxReader.render(md).matchAll(/href="([^"]*)"/g)].map((m) => laxReader.utils.unescapeAll(m[1]!));
+  const linked = (href: string): JSONContent => ({
+    type: 'doc',
+    content: [{ type: 'paragraph', content: [{ type: 'text', text: 'the shop', marks: [{ type: 'link', attrs: { href } }] }] }],
+  });
+
+  // OWASP XSS Filter Evasion Cheat Sheet: character references inside a scheme; CommonMark 0.31.2, 6.3 (entity and
+  // numeric character references are decoded in link destinations) and 2.4 (backslash escapes).
+  it.each([
+    'javascript&colon;alert(1)',
+    '&#106;avascript:alert(1)',
+    'java&#x73;cript:alert(1)',
+    '//evil.example/steal',
+    '/\\evil.example/steal',
+    '&#47;/evil.example/steal',
+    '\\/\\/evil.example',
+  ])('refuses %j: the words stay, the link goes, and no reader finds a script or another site', (href) => {
+    const md = docToMarkdown(linked(href));
+    expect(md).toContain('the shop');
+    expect(md).not.toContain('](');
+    for (const h of hrefs(md)) expect(h).not.toMatch(/^(javascript:|\/\/|\/\\)/i);
+  });
+
+  it('keeps ordinary addresses, percent-encoding only what a reader would otherwise change', () => {
+    expect(docToMarkdown(linked('https://shop.example/kraft?colour=brown&size=a4'))).toContain('[the shop](https://shop.example/kraft?colour=brown&size=a4)');
+    expect(docToMarkdown(linked('/t/round-box#template'))).toContain('[the shop](/t/round-box#template)');
+    const odd = docToMarkdown(linked('https://shop.example/a b(c)?x=1&amp;y=2'));
+    expect(hrefs(odd)).toEqual(['https://shop.example/a%20b%28c%29?x=1%26amp;y=2']);
+    // No ";": CommonMark leaves it, but a browser reading an attribute would decode "&#58" to ":".
+    expect(hrefs(docToMarkdown(linked('javascript&#58alert(1)')))).toEqual(['javascript%26#58alert%281%29']);
+  });
+
+  it('applies the same rule to supply links in the live list', () => {
+    const doc: JSONContent = { type: 'doc', content: [{ type: 'supplyList', attrs: { grouped: false } }] };
+    const ctx: RenderContext = {
+      supplies: [
+        { category: 'tools', name: 'Bone folder', url: 'java&#x73;cript:alert(1)' },
+        { category: 'tools', name: 'Glue', url: 'https://shop.example/glue' },
+      ],
+    };
+    const md = docToMarkdown(doc, ctx);
+    expect(md).toContain('- Bone folder');
+    expect(hrefs(md)).toEqual(['https://shop.example/glue']);
   });
 });

@@ -1,5 +1,6 @@
 /**
- * Markdown out and in, with conventions of our own for the nodes Markdown lacks:
+ * Markdown out and in through prosemirror-markdown, with conventions of our own for the nodes
+ * Markdown lacks:
  *
  * - a step is a heading "### Step N: Title" followed by its blocks, up to the next heading
  *   or rule; a paragraph "Watch at m:ss" (or a link with that text) gives its time;
@@ -10,110 +11,66 @@
  *   between them is written for readers and skipped on reading, since the rows live in the
  *   Cut list and Supplies sections.
  *
- * Reading walks markdown-it's tokens straight into Tiptap JSON: raw HTML is never passed on
- * (only the markers are read), and every address goes through the same checks as the editor.
- * Pure: runs in the browser as well as on the server.
+ * Writing: a `MarkdownSerializer` with a serializer for each of our nodes. Reading: markdown-it
+ * tokenizes, one core rule of ours (`writeUpRule`) turns our conventions into tokens of our own
+ * (step, tip, still, cut_list ...) and drops what the write-up cannot hold (raw HTML, unsafe
+ * addresses), and a `MarkdownParser` maps every token to the write-up's schema. Pure: runs in
+ * the browser as well as on the server.
  */
 import type { JSONContent } from '@tiptap/core';
+import { Node as PMNode } from '@tiptap/pm/model';
 import MarkdownIt from 'markdown-it';
-import type { Token } from 'markdown-it';
+import type { StateCore, Token } from 'markdown-it';
+import { MarkdownParser, MarkdownSerializer, type MarkdownSerializerState } from 'prosemirror-markdown';
 import { parseTimestamp } from '../transcript/timestamp';
-import {
-  CALLOUT_LABELS,
-  DEFAULT_DISCLOSURE,
-  groupSupplies,
-  inchSize,
-  mmSize,
-  plainText,
-  supplyDetails,
-  timeLink,
-  TIME_LINE,
-} from './render-parts';
+import { getEditorSchema } from './extensions';
+import { CALLOUT_LABELS, DEFAULT_DISCLOSURE, groupSupplies, inchSize, mmSize, sponsoredTag, supplyDetails, timeLink, TIME_LINE } from './render-parts';
 import { CUT_LIST_UNITS, type CutListUnits, type RenderContext, type RenderPiece, type StillAttrs } from './types';
 import { isSafeImageSrc, isSafeLinkHref } from './urls';
 import { validateDoc } from './validate-doc';
 
 // ---------------------------------------------------------------- writing
 
-type Mark = NonNullable<JSONContent['marks']>[number];
-const MARK_RANK: Record<string, number> = { link: 0, bold: 1, italic: 2, strike: 3 };
-const DELIMS: Record<string, string> = { bold: '**', italic: '*', strike: '~~' };
+/** Besides prosemirror-markdown's own escapes: raw HTML and character references must stay words. */
+const ESCAPE_EXTRA = /<|&(?=#?[a-z0-9]+;)/gi;
 
+/** Text we build ourselves (table cells, supply lines) escaped like the serializer's text. */
 function escapeText(s: string, inTable = false): string {
-  let out = s.replace(/\n/g, ' ').replace(/[\\`*_[\]<~]/g, '\\$&').replace(/&(?=#?[a-z0-9]+;)/gi, '\\&');
+  let out = s
+    .replace(/\n/g, ' ')
+    .replace(/[\\`*_[\]<~]/g, '\\$&')
+    .replace(/&(?=#?[a-z0-9]+;)/gi, '\\&');
   if (inTable) out = out.replace(/\|/g, '\\|');
   return out;
 }
 
-// Characters that would start a block at the start of a line.
-function escapeLineStarts(s: string): string {
-  return s
-    .split('\n')
-    .map((line) => line.replace(/^([#>+=-])/, '\\$1').replace(/^(\d+)([.)])/, '$1\\$2'))
-    .join('\n');
+// Characters that would start a block at the start of a line (after a hard break).
+function escapeLineStart(s: string): string {
+  return s.replace(/^([#>+=-])/, '\\$1').replace(/^(\d+)([.)])/, '$1\\$2');
+}
+
+/**
+ * A link address as a Markdown destination, or null when it must go. A Markdown reader decodes
+ * character references and backslash escapes in a destination ("javascript&colon;x" becomes
+ * "javascript:x"), which HTML-escaping never did, so the address is checked again as a reader
+ * would see it; what is left is written so that every reader sees the same text: spaces,
+ * brackets, backslashes and the "&" of anything that looks like a character reference are percent-encoded.
+ */
+function markdownHref(href: unknown): string | null {
+  if (!isSafeLinkHref(href) || !isSafeLinkHref(tokenizer.utils.unescapeAll(href))) return null;
+  return encodeHref(href);
 }
 
 function encodeHref(href: string): string {
-  return href.replace(/[ ()<>]/g, (c) => encodeURIComponent(c));
+  // "&#58" needs no ";" for a browser reading an attribute, so every "&#" goes.
+  return href.replace(/[ ()<>\\]|&(?=#|[a-z0-9]+;)/gi, (c) => `%${c.charCodeAt(0).toString(16).toUpperCase()}`);
 }
 
 function quoteTitle(t: string): string {
-  return `"${t.replace(/\n/g, ' ').replace(/[\\"]/g, '\\$&').replace(/&(?=#?[a-z0-9]+;)/gi, '\\&')}"`;
-}
-
-function sameMark(a: Mark, b: Mark): boolean {
-  return a.type === b.type && (a.type !== 'link' || a.attrs?.href === b.attrs?.href);
-}
-
-/** Inline content as Markdown; whitespace is moved outside emphasis so the delimiters stay valid. */
-function inlineMd(nodes: readonly JSONContent[] | undefined, inTable = false): string {
-  type Seg = { text: string; marks: Mark[]; br?: boolean };
-  const segs: Seg[] = [];
-  const list = [...(nodes ?? [])];
-  while (list.length && list[list.length - 1]!.type === 'hardBreak') list.pop();
-  for (const n of list) {
-    if (n.type === 'hardBreak') {
-      segs.push({ text: '', marks: [], br: true });
-      continue;
-    }
-    if (n.type !== 'text' || !n.text) continue;
-    const marks = [...(n.marks ?? [])].filter((m) => m.type in MARK_RANK && (m.type !== 'link' || isSafeLinkHref(m.attrs?.href))).sort((a, b) => MARK_RANK[a.type]! - MARK_RANK[b.type]!);
-    const m = /^(\s*)([\s\S]*?)(\s*)$/.exec(n.text.replace(/\n/g, ' '))!;
-    const outer = marks.filter((k) => k.type === 'link');
-    if (m[1]) segs.push({ text: m[1], marks: outer });
-    if (m[2]) segs.push({ text: m[2], marks });
-    if (m[3]) segs.push({ text: m[3], marks: outer });
-  }
-  let out = '';
-  const stack: Mark[] = [];
-  const close = (m: Mark) => (m.type === 'link' ? `](${encodeHref(String(m.attrs!.href))}${m.attrs?.title ? ` ${quoteTitle(String(m.attrs.title))}` : ''})` : DELIMS[m.type]!);
-  for (const s of segs) {
-    const marks = s.br ? [] : s.marks;
-    let keep = 0;
-    while (keep < stack.length && keep < marks.length && sameMark(stack[keep]!, marks[keep]!)) keep++;
-    while (stack.length > keep) out += close(stack.pop()!);
-    for (const m of marks.slice(keep)) {
-      out += m.type === 'link' ? '[' : DELIMS[m.type]!;
-      stack.push(m);
-    }
-    out += s.br ? '\\\n' : escapeText(s.text, inTable);
-  }
-  while (stack.length) out += close(stack.pop()!);
-  return out;
-}
-
-function indent(text: string, first: string, rest: string): string {
-  return text
-    .split('\n')
-    .map((line, i) => (i === 0 ? first + line : line ? rest + line : line))
-    .join('\n');
-}
-
-function quote(text: string): string {
-  return text
-    .split('\n')
-    .map((line) => (line ? `> ${line}` : '>'))
-    .join('\n');
+  return `"${t
+    .replace(/\n/g, ' ')
+    .replace(/[\\"]/g, '\\$&')
+    .replace(/&(?=#?[a-z0-9]+;)/gi, '\\&')}"`;
 }
 
 function stillMd(a: StillAttrs): string {
@@ -128,126 +85,192 @@ function attrString(attrs: Record<string, string>): string {
     .join('');
 }
 
-class MdWriter {
-  private stepNumber = 0;
+/** Tight when every item is one paragraph, perhaps with a nested list after it. */
+function isTight(list: PMNode): boolean {
+  let tight = true;
+  list.forEach((item) =>
+    item.forEach((b, _, k) => {
+      if (k === 0 ? b.type.name !== 'paragraph' : b.type.name !== 'bulletList' && b.type.name !== 'orderedList') tight = false;
+    }),
+  );
+  return tight;
+}
 
-  constructor(private readonly ctx: RenderContext) {}
+/**
+ * Whether a list follows a list of its own kind that used the usual marker: it then takes the
+ * other one ("*" for "-", ")" for "."), since a new marker is what starts a new list in CommonMark.
+ */
+function afterSameList(parent: PMNode, index: number): boolean {
+  let run = 0;
+  for (let i = index - 1; i >= 0 && parent.child(i).type === parent.child(index).type; i--) run++;
+  return run % 2 === 1;
+}
 
-  blocks(nodes: readonly JSONContent[] | undefined, tight = false): string {
-    return (nodes ?? [])
-      .map((n) => this.block(n))
-      .filter((s): s is string => s !== null && s !== '')
-      .join(tight ? '\n' : '\n\n');
+/** A list, tight or loose by its content (our list nodes carry no `tight` attribute). */
+function renderList(state: MarkdownSerializerState, node: PMNode, delim: string, firstDelim: (i: number) => string): void {
+  const before = state.options.tightLists;
+  state.options.tightLists = isTight(node);
+  state.renderList(node, delim, firstDelim);
+  state.options.tightLists = before;
+}
+
+/** The cut list between its markers, filled from the context as a GFM table. */
+function cutListMd(ctx: RenderContext, units: CutListUnits): string {
+  const show = (CUT_LIST_UNITS as readonly string[]).includes(units) ? units : 'both';
+  const parts = [`<!-- cut-list${attrString({ units: show })} -->`];
+  const pieces = ctx.pieces ?? [];
+  if (pieces.length) {
+    const withScores = pieces.some((p) => p.scoreLines?.length);
+    const withNotes = pieces.some((p) => p.notes?.trim());
+    const head = ['Piece', 'Material', 'Qty', 'Size', ...(withScores ? ['Score lines'] : []), ...(withNotes ? ['Notes'] : [])];
+    const cell = (s: string) => escapeText(s, true);
+    const size = (p: RenderPiece) => (show === 'mm' ? mmSize(p) : show === 'in' ? inchSize(p) : `${inchSize(p)} (${mmSize(p)})`);
+    const rows = pieces.map((p) => {
+      const cells = [p.name, p.material, String(p.quantity), size(p)];
+      if (withScores) cells.push((p.scoreLines ?? []).join(', '));
+      if (withNotes) cells.push(p.notes?.trim() ?? '');
+      return `| ${cells.map(cell).join(' | ')} |`;
+    });
+    parts.push([`| ${head.join(' | ')} |`, `| ${head.map(() => '---').join(' | ')} |`, ...rows].join('\n'));
+    if (ctx.precision && show !== 'mm') parts.push(`Inch sizes are given to the nearest 1/${ctx.precision} in; millimetres to 0.1 mm.`);
   }
+  parts.push('<!-- /cut-list -->');
+  return parts.join('\n\n');
+}
 
-  private block(n: JSONContent): string | null {
-    switch (n.type) {
-      case 'paragraph':
-        return escapeLineStarts(inlineMd(n.content));
-      case 'heading': {
-        const text = inlineMd(n.content);
-        const level = [1, 2, 3].includes(n.attrs?.level as number) ? (n.attrs!.level as number) : 2;
-        return text ? `${'#'.repeat(level)} ${text}` : null;
+/** The supplies between their markers, with the disclosure when a link is sponsored. */
+function suppliesMd(ctx: RenderContext, grouped: boolean): string {
+  const parts = [`<!-- supplies${attrString({ grouped: String(grouped) })} -->`];
+  const supplies = ctx.supplies ?? [];
+  if (supplies.length) {
+    const line = (s: (typeof supplies)[number]) => {
+      const d = supplyDetails(s);
+      const href = markdownHref(s.url);
+      const name = href ? `[${escapeText(s.name)}](${href})` : escapeText(s.name);
+      return `- ${name}${escapeText(sponsoredTag(s) + d.quantity + d.note)}${d.code ? ` (discount code **${escapeText(d.code)}**)` : ''}`;
+    };
+    if (supplies.some((s) => s.sponsored && s.url && isSafeLinkHref(s.url))) parts.push(`*${escapeText(ctx.disclosure?.trim() || DEFAULT_DISCLOSURE)}*`);
+    if (grouped) for (const g of groupSupplies(supplies)) parts.push(`**${escapeText(g.label)}**`, g.items.map(line).join('\n'));
+    else parts.push(supplies.map(line).join('\n'));
+  }
+  parts.push('<!-- /supplies -->');
+  return parts.join('\n\n');
+}
+
+/** A serializer for one export: steps are numbered as they come, the live lists filled from `ctx`. */
+function writeUpSerializer(ctx: RenderContext): MarkdownSerializer {
+  let stepNumber = 0;
+  const block = (state: MarkdownSerializerState, node: PMNode, text: string) => {
+    state.write();
+    state.text(text, false);
+    state.closeBlock(node);
+  };
+  const callout = (state: MarkdownSerializerState, node: PMNode) => {
+    state.wrapBlock('> ', null, node, () => {
+      state.write(`**${CALLOUT_LABELS[node.type.name as keyof typeof CALLOUT_LABELS]}:**`);
+      const first = node.firstChild;
+      const head = first?.type.name === 'paragraph' && first.content.size > 0;
+      if (head) {
+        state.write(' ');
+        state.renderInline(first, false);
       }
-      case 'bulletList':
-      case 'orderedList':
-        return this.list(n);
-      case 'blockquote':
-        return quote(this.blocks(n.content));
-      case 'horizontalRule':
-        return '---';
-      case 'still': {
-        const a = n.attrs as StillAttrs | undefined;
-        return a && isSafeImageSrc(a.src) ? stillMd(a) : null;
-      }
-      case 'tip':
-      case 'caution': {
-        const label = `**${CALLOUT_LABELS[n.type]}:**`;
-        const [first, ...rest] = n.content ?? [];
-        const head = first?.type === 'paragraph' && inlineMd(first.content) ? `${label} ${inlineMd(first.content)}` : label;
-        const body = first?.type === 'paragraph' ? rest : (n.content ?? []);
-        return quote([head, this.blocks(body)].filter(Boolean).join('\n\n'));
-      }
-      case 'step':
-        return this.step(n);
-      case 'cutList':
-        return this.cutList((n.attrs?.units as CutListUnits) ?? 'both');
-      case 'supplyList':
-        return this.supplies(n.attrs?.grouped !== false);
-      default:
-        return null;
-    }
-  }
-
-  private list(n: JSONContent): string {
-    const items = (n.content ?? []).filter((i) => i.type === 'listItem');
-    // Tight when every item is one paragraph, perhaps with a nested list after it.
-    const tight = items.every((i) => (i.content ?? []).every((b, k) => (k === 0 ? b.type === 'paragraph' : b.type === 'bulletList' || b.type === 'orderedList')));
-    const start = n.type === 'orderedList' && Number.isInteger(n.attrs?.start) ? (n.attrs!.start as number) : 1;
-    return items
-      .map((item, k) => {
-        const marker = n.type === 'orderedList' ? `${start + k}. ` : '- ';
-        const body = this.blocks(item.content, tight) || '';
-        return indent(body, marker, ' '.repeat(marker.length));
-      })
-      .join(tight ? '\n' : '\n\n');
-  }
-
-  private step(n: JSONContent): string {
-    const number = ++this.stepNumber;
-    const [first, ...rest] = n.content ?? [];
-    const hasTitle = first?.type === 'stepTitle';
-    const title = hasTitle ? plainText(first).replace(/\s+/g, ' ').trim() : '';
-    const parts = [`### Step ${number}${title ? `: ${escapeText(title)}` : ''}`];
-    const body = this.blocks(hasTitle ? rest : n.content);
-    if (body) parts.push(body);
-    const atMs = n.attrs?.atMs;
-    if (typeof atMs === 'number' && Number.isFinite(atMs) && atMs >= 0) {
-      const link = timeLink(atMs, this.ctx.videoUrl);
-      parts.push(link.href ? `[${link.label}](${encodeHref(link.href)})` : link.label);
-    }
-    return parts.join('\n\n');
-  }
-
-  private cutList(units: CutListUnits): string {
-    const show = (CUT_LIST_UNITS as readonly string[]).includes(units) ? units : 'both';
-    const parts = [`<!-- cut-list${attrString({ units: show })} -->`];
-    const pieces = this.ctx.pieces ?? [];
-    if (pieces.length) {
-      const withScores = pieces.some((p) => p.scoreLines?.length);
-      const withNotes = pieces.some((p) => p.notes?.trim());
-      const head = ['Piece', 'Material', 'Qty', 'Size', ...(withScores ? ['Score lines'] : []), ...(withNotes ? ['Notes'] : [])];
-      const cell = (s: string) => escapeText(s, true);
-      const size = (p: RenderPiece) => (show === 'mm' ? mmSize(p) : show === 'in' ? inchSize(p) : `${inchSize(p)} (${mmSize(p)})`);
-      const rows = pieces.map((p) => {
-        const cells = [p.name, p.material, String(p.quantity), size(p)];
-        if (withScores) cells.push((p.scoreLines ?? []).join(', '));
-        if (withNotes) cells.push(p.notes?.trim() ?? '');
-        return `| ${cells.map(cell).join(' | ')} |`;
+      state.closeBlock(head ? first : node);
+      node.forEach((child, _, i) => {
+        if (i > 0 || (first?.type.name !== 'paragraph' && child === first)) state.render(child, node, i);
       });
-      parts.push([`| ${head.join(' | ')} |`, `| ${head.map(() => '---').join(' | ')} |`, ...rows].join('\n'));
-      if (this.ctx.precision && show !== 'mm') parts.push(`Inch sizes are given to the nearest 1/${this.ctx.precision} in; millimetres to 0.1 mm.`);
-    }
-    parts.push('<!-- /cut-list -->');
-    return parts.join('\n\n');
-  }
-
-  private supplies(grouped: boolean): string {
-    const parts = [`<!-- supplies${attrString({ grouped: String(grouped) })} -->`];
-    const supplies = this.ctx.supplies ?? [];
-    if (supplies.length) {
-      const line = (s: (typeof supplies)[number]) => {
-        const d = supplyDetails(s);
-        const name = s.url && isSafeLinkHref(s.url) ? `[${escapeText(s.name)}](${encodeHref(s.url)})` : escapeText(s.name);
-        return `- ${name}${escapeText(d.quantity + d.note)}${d.code ? ` (discount code **${escapeText(d.code)}**)` : ''}`;
-      };
-      if (supplies.some((s) => s.sponsored && s.url && isSafeLinkHref(s.url))) parts.push(`*${escapeText(this.ctx.disclosure?.trim() || DEFAULT_DISCLOSURE)}*`);
-      if (grouped) for (const g of groupSupplies(supplies)) parts.push(`**${escapeText(g.label)}**`, g.items.map(line).join('\n'));
-      else parts.push(supplies.map(line).join('\n'));
-    }
-    parts.push('<!-- /supplies -->');
-    return parts.join('\n\n');
-  }
+    });
+  };
+  return new MarkdownSerializer(
+    {
+      paragraph(state, node) {
+        state.renderInline(node);
+        state.closeBlock(node);
+      },
+      heading(state, node) {
+        if (!node.textContent.trim()) return;
+        const level = [1, 2, 3].includes(node.attrs.level as number) ? (node.attrs.level as number) : 2;
+        state.write(`${state.repeat('#', level)} `);
+        state.renderInline(node, false);
+        state.closeBlock(node);
+      },
+      blockquote(state, node) {
+        state.wrapBlock('> ', null, node, () => state.renderContent(node));
+      },
+      bulletList(state, node, parent, index) {
+        const bullet = afterSameList(parent, index) ? '*' : '-';
+        renderList(state, node, '  ', () => `${bullet} `);
+      },
+      orderedList(state, node, parent, index) {
+        const start = Number.isInteger(node.attrs.start) ? (node.attrs.start as number) : 1;
+        const width = String(start + node.childCount - 1).length;
+        const delim = afterSameList(parent, index) ? ')' : '.';
+        renderList(state, node, ' '.repeat(width + 2), (i) => `${start + i}${delim} `);
+      },
+      listItem(state, node) {
+        state.renderContent(node);
+      },
+      horizontalRule(state, node) {
+        block(state, node, '---');
+      },
+      hardBreak(state, node, parent, index) {
+        // A break at the end of a block would swallow the blank line after it: dropped.
+        for (let i = index + 1; i < parent.childCount; i++)
+          if (parent.child(i).type !== node.type) {
+            state.write('\\\n');
+            return;
+          }
+      },
+      text(state, node, parent, index) {
+        const text = (node.text ?? '').replace(/\n/g, ' ');
+        // After a hard break the words start a line: keep them from opening a block.
+        if (index > 0 && parent.child(index - 1).type.name === 'hardBreak') state.text(escapeLineStart(state.esc(text)), false);
+        else state.text(text);
+      },
+      still(state, node) {
+        const a = node.attrs as StillAttrs;
+        if (isSafeImageSrc(a.src)) block(state, node, stillMd(a));
+      },
+      tip: callout,
+      caution: callout,
+      step(state, node) {
+        const number = ++stepNumber;
+        const first = node.firstChild;
+        const title = first?.type.name === 'stepTitle' ? first.textContent.replace(/\s+/g, ' ').trim() : '';
+        block(state, node, `### Step ${number}${title ? `: ${escapeText(title)}` : ''}`);
+        node.forEach((child, _, i) => {
+          if (child.type.name !== 'stepTitle') state.render(child, node, i);
+        });
+        const atMs = node.attrs.atMs;
+        if (typeof atMs === 'number' && Number.isFinite(atMs) && atMs >= 0) {
+          const link = timeLink(atMs, ctx.videoUrl);
+          const href = markdownHref(link.href);
+          block(state, node, href ? `[${link.label}](${href})` : link.label);
+        }
+      },
+      stepTitle() {
+        // Written by its step, as the heading.
+      },
+      cutList(state, node) {
+        block(state, node, cutListMd(ctx, (node.attrs.units as CutListUnits) ?? 'both'));
+      },
+      supplyList(state, node) {
+        block(state, node, suppliesMd(ctx, node.attrs.grouped !== false));
+      },
+    },
+    {
+      bold: { open: '**', close: '**', mixable: true, expelEnclosingWhitespace: true },
+      italic: { open: '*', close: '*', mixable: true, expelEnclosingWhitespace: true },
+      strike: { open: '~~', close: '~~', mixable: true, expelEnclosingWhitespace: true },
+      link: {
+        open: (_s, mark) => (markdownHref(mark.attrs.href) ? '[' : ''),
+        close: (_s, mark) => {
+          const href = markdownHref(mark.attrs.href);
+          return href ? `](${href}${mark.attrs.title ? ` ${quoteTitle(String(mark.attrs.title))}` : ''})` : '';
+        },
+      },
+    },
+    { escapeExtraCharacters: ESCAPE_EXTRA, hardBreakNodeName: 'hardBreak', strict: false },
+  );
 }
 
 /**
@@ -256,15 +279,15 @@ class MdWriter {
  */
 export function docToMarkdown(doc: JSONContent, ctx: RenderContext = {}): string {
   if (!doc || doc.type !== 'doc') return '';
-  const text = new MdWriter(ctx).blocks(doc.content);
+  const checked = validateDoc(doc, { strip: true });
+  if (!checked.ok) return '';
+  const text = writeUpSerializer(ctx).serialize(PMNode.fromJSON(getEditorSchema(), checked.doc)).replace(/\s+$/, '');
   return text ? `${text}\n` : '';
 }
 
 // ---------------------------------------------------------------- reading
 
-// html: true only so the comment markers arrive as tokens; every other HTML token is dropped.
-const md = new MarkdownIt({ html: true, linkify: false, typographer: false });
-
+/** A token tree: markdown-it's open/close pairs as nodes with children. */
 interface TreeNode {
   type: string;
   token: Token;
@@ -289,67 +312,98 @@ function buildTree(tokens: Token[]): TreeNode[] {
 
 const MARKER = /^<!--\s*(\/?)(cut-list|supplies)\b([^>]*?)\s*-->\s*$/;
 const STEP_HEADING = /^Step\s+\d+\s*(?:[:.)\u2013\u2014-]\s*([\s\S]*))?$/i;
-const TEXT_MARKS: Record<string, string> = { strong: 'bold', em: 'italic', s: 'strike' };
+const MARK_TOKENS = new Set(['strong', 'em', 's']);
 
 type Context = 'doc' | 'step' | 'callout' | 'listItem' | 'blockquote';
 
-function text(t: string, marks: Mark[]): JSONContent {
-  return marks.length ? { type: 'text', text: t, marks: marks.map((m) => ({ ...m })) } : { type: 'text', text: t };
-}
-
-/** Inline tokens to Tiptap inline nodes; images come out separately as stills. */
-function readInline(tokens: Token[] | null): { inline: JSONContent[]; stills: JSONContent[] } {
-  const inline: JSONContent[] = [];
-  const stills: JSONContent[] = [];
-  const marks: (Mark | null)[] = [];
-  const live = () => marks.filter((m): m is Mark => m !== null);
-  const push = (t: string) => {
-    if (!t) return;
-    const node = text(t, live());
-    const prev = inline[inline.length - 1];
-    if (prev?.type === 'text' && JSON.stringify(prev.marks ?? []) === JSON.stringify(node.marks ?? [])) prev.text += t;
-    else inline.push(node);
-  };
-  for (const t of tokens ?? []) {
-    if (t.type === 'text' || t.type === 'code_inline') push(t.content);
-    else if (t.type === 'softbreak') push(' ');
-    else if (t.type === 'hardbreak') inline.push({ type: 'hardBreak' });
-    else if (t.type === 'link_open') {
-      const href = t.attrGet('href');
-      const title = t.attrGet('title');
-      marks.push(isSafeLinkHref(href) ? { type: 'link', attrs: title ? { href, title } : { href } } : null);
-    } else if (t.type === 'link_close') marks.pop();
-    else if (t.type.endsWith('_open') && TEXT_MARKS[t.type.slice(0, -5)]) marks.push({ type: TEXT_MARKS[t.type.slice(0, -5)]! });
-    else if (t.type.endsWith('_close') && TEXT_MARKS[t.type.slice(0, -6)]) marks.pop();
-    else if (t.type === 'image') {
-      const src = t.attrGet('src');
-      if (isSafeImageSrc(src)) {
-        const alt = (t.children ?? []).map((c) => (c.type === 'text' || c.type === 'code_inline' ? c.content : c.type === 'softbreak' ? ' ' : '')).join('');
-        const attrs: StillAttrs = { stillId: null, src, alt, caption: String(t.attrGet('title') ?? ''), width: null, height: null };
-        stills.push({ type: 'still', attrs: { ...attrs } });
-      }
-    }
-    // html_inline and anything else: dropped, never passed on as markup.
-  }
-  // Spaces left at the ends by dropped images or markup.
-  const first = inline[0];
-  if (first?.type === 'text') first.text = first.text!.replace(/^\s+/, '');
-  const last = inline[inline.length - 1];
-  if (last?.type === 'text') last.text = last.text!.replace(/\s+$/, '');
-  return { inline: inline.filter((n) => n.type !== 'text' || n.text), stills };
-}
-
-function paragraph(inline: JSONContent[]): JSONContent {
-  return inline.length ? { type: 'paragraph', content: inline } : { type: 'paragraph' };
-}
-
-class MdReader {
+/** Builds the token stream the parser maps to the write-up's schema (see `TOKENS`). */
+class TokenWriter {
+  readonly out: Token[] = [];
   private skipping: string | null = null;
 
+  constructor(private readonly state: StateCore) {}
+
+  private token(type: string, nesting: -1 | 0 | 1, meta?: Record<string, unknown>): Token {
+    const t = new this.state.Token(type, '', nesting);
+    if (meta) t.meta = meta;
+    return t;
+  }
+
+  private inlineToken(children: Token[]): Token {
+    const t = this.token('inline', 0);
+    t.children = children;
+    t.content = '';
+    return t;
+  }
+
+  private textToken(content: string): Token {
+    const t = this.token('text', 0);
+    t.content = content;
+    return t;
+  }
+
+  private paragraph(into: Token[], children: Token[]): void {
+    into.push(this.token('paragraph_open', 1), this.inlineToken(children), this.token('paragraph_close', -1));
+  }
+
+  /**
+   * Inline tokens the write-up can hold: words, breaks, bold, italic, strike and safe links.
+   * Images come out separately as stills; raw HTML, unsafe links' marks and code marks go.
+   */
+  private inline(tokens: readonly Token[] | null): { inline: Token[]; stills: Token[] } {
+    const inline: Token[] = [];
+    const stills: Token[] = [];
+    const links: boolean[] = [];
+    for (const t of tokens ?? []) {
+      if (t.type === 'text' || t.type === 'code_inline') {
+        if (t.content) inline.push(this.textToken(t.content));
+      } else if (t.type === 'softbreak') inline.push(this.textToken(' '));
+      else if (t.type === 'hardbreak') inline.push(t);
+      else if (t.type === 'link_open') {
+        const safe = isSafeLinkHref(t.attrGet('href'));
+        links.push(safe);
+        if (safe) inline.push(t);
+      } else if (t.type === 'link_close') {
+        if (links.pop()) inline.push(t);
+      } else if (MARK_TOKENS.has(t.type.replace(/_(open|close)$/, ''))) inline.push(t);
+      else if (t.type === 'image') {
+        const src = t.attrGet('src');
+        if (isSafeImageSrc(src)) {
+          const alt = (t.children ?? []).map((c) => (c.type === 'text' || c.type === 'code_inline' ? c.content : c.type === 'softbreak' ? ' ' : '')).join('');
+          const attrs: StillAttrs = { stillId: null, src, alt, caption: String(t.attrGet('title') ?? ''), width: null, height: null };
+          stills.push(this.token('still', 0, { ...attrs }));
+        }
+      }
+      // html_inline and anything else: dropped, never passed on as markup.
+    }
+    // Spaces left at the ends by dropped images or markup.
+    const words = inline.filter((t) => t.type === 'text' || t.type === 'hardbreak');
+    const first = words[0];
+    if (first?.type === 'text') first.content = first.content.replace(/^\s+/, '');
+    const last = words[words.length - 1];
+    if (last?.type === 'text') last.content = last.content.replace(/\s+$/, '');
+    const kept = inline.filter((t) => t.type !== 'text' || t.content);
+    return { inline: kept.some((t) => t.type === 'text' || t.type === 'hardbreak') ? kept : [], stills };
+  }
+
+  private inlineOf(n: TreeNode) {
+    return this.inline(n.children[0]?.token.children ?? null);
+  }
+
+  private plainWords(tokens: readonly Token[]): string {
+    return tokens
+      .map((t) => (t.type === 'text' ? t.content : t.type === 'hardbreak' ? ' ' : ''))
+      .join('')
+      .trim();
+  }
+
   /** Top level: steps, headings, the live-list markers. */
-  doc(nodes: TreeNode[]): JSONContent[] {
-    const out: JSONContent[] = [];
-    let step: JSONContent | null = null;
+  doc(nodes: TreeNode[]): void {
+    let step: Token | null = null;
+    const closeStep = () => {
+      if (step) this.out.push(this.token('step_close', -1));
+      step = null;
+    };
     for (const n of nodes) {
       if (n.type === 'html_block') {
         const m = MARKER.exec(n.token.content.trim());
@@ -360,129 +414,157 @@ class MdReader {
           continue;
         }
         if (this.skipping) continue;
-        step = null;
+        closeStep();
         this.skipping = kind!;
         const attr = (name: string) => new RegExp(`${name}="([^"]*)"`).exec(rest ?? '')?.[1];
         if (kind === 'cut-list') {
           const units = attr('units');
-          out.push({ type: 'cutList', attrs: { units: (CUT_LIST_UNITS as readonly string[]).includes(units ?? '') ? units : 'both' } });
-        } else out.push({ type: 'supplyList', attrs: { grouped: attr('grouped') !== 'false' } });
+          this.out.push(this.token('cut_list', 0, { units: (CUT_LIST_UNITS as readonly string[]).includes(units ?? '') ? units : 'both' }));
+        } else this.out.push(this.token('supply_list', 0, { grouped: attr('grouped') !== 'false' }));
         continue;
       }
       if (this.skipping) continue;
       if (n.type === 'heading') {
-        const title = readInline(n.children[0]?.token.children ?? null).inline.map(plainText).join('').trim();
-        const s = STEP_HEADING.exec(title);
+        const s = STEP_HEADING.exec(this.plainWords(this.inlineOf(n).inline));
+        closeStep();
         if (s) {
-          step = { type: 'step', attrs: { atMs: null, chapterId: null }, content: [{ type: 'stepTitle', content: s[1]?.trim() ? [{ type: 'text', text: s[1].trim() }] : [] }] };
-          out.push(step);
+          step = this.token('step_open', 1, { atMs: null, chapterId: null });
+          const title = s[1]?.trim();
+          this.out.push(step, this.token('step_title_open', 1), this.inlineToken(title ? [this.textToken(title)] : []), this.token('step_title_close', -1));
           continue;
         }
-        step = null;
       }
-      if (n.type === 'hr') step = null;
+      if (n.type === 'hr') closeStep();
       if (step) {
         const atMs = this.timeLine(n);
-        if (atMs !== null) step.attrs!.atMs = atMs;
-        else step.content!.push(...this.block(n, 'step'));
-      } else out.push(...this.block(n, 'doc'));
+        if (atMs !== null) ((step as Token).meta as Record<string, unknown>).atMs = atMs;
+        else this.block(n, 'step', this.out);
+      } else this.block(n, 'doc', this.out);
     }
-    for (const n of out) if (n.type === 'step' && !n.content![0]!.content!.length) delete n.content![0]!.content;
-    return out;
+    closeStep();
   }
 
-  /** "Watch at 3:12", plain or as a link, read as the step's time. */
+  /** "Watch at 3:12", plain or as one link, read as the step's time. */
   private timeLine(n: TreeNode): number | null {
     if (n.type !== 'paragraph') return null;
-    const inline = readInline(n.children[0]?.token.children ?? null).inline;
-    const words = inline.map(plainText).join('').trim();
-    const m = TIME_LINE.exec(words);
+    const inline = this.inlineOf(n).inline;
+    const m = TIME_LINE.exec(this.plainWords(inline));
     if (!m) return null;
-    const links = new Set(inline.map((i) => i.marks?.find((k) => k.type === 'link')?.attrs?.href ?? null));
-    if (links.size > 1) return null;
+    if (inline.filter((t) => t.type === 'link_open').length > 1) return null;
+    const linked = inline.some((t) => t.type === 'link_open');
+    // Words outside the one link would make it a sentence, not the time line.
+    if (linked && (inline[0]?.type !== 'link_open' || inline[inline.length - 1]?.type !== 'link_close')) return null;
     return parseTimestamp(m[1]!);
   }
 
-  blocks(nodes: TreeNode[], ctx: Context): JSONContent[] {
-    return nodes.flatMap((n) => this.block(n, ctx));
+  private blocks(nodes: TreeNode[], ctx: Context, into: Token[]): void {
+    for (const n of nodes) this.block(n, ctx, into);
   }
 
-  private block(n: TreeNode, ctx: Context): JSONContent[] {
-    const inlineOf = (node: TreeNode) => readInline(node.children[0]?.token.children ?? null);
+  private block(n: TreeNode, ctx: Context, into: Token[]): void {
     switch (n.type) {
       case 'paragraph': {
-        const { inline, stills } = inlineOf(n);
-        const out = inline.length ? [paragraph(inline)] : [];
-        return ctx === 'callout' ? out : [...out, ...stills];
+        const { inline, stills } = this.inlineOf(n);
+        if (inline.length) this.paragraph(into, inline);
+        if (ctx !== 'callout') into.push(...stills);
+        return;
       }
       case 'heading': {
-        const { inline } = inlineOf(n);
-        if (!inline.length) return [];
+        const { inline } = this.inlineOf(n);
+        if (!inline.length) return;
         // Headings live only at the top level and in quotes; elsewhere the words stay, in bold.
-        if (ctx === 'doc' || ctx === 'blockquote') return [{ type: 'heading', attrs: { level: Math.min(3, Number(n.token.tag.slice(1)) || 2) }, content: inline }];
-        return [paragraph(inline.map((i) => ({ ...i, marks: [...(i.marks ?? []).filter((m) => m.type !== 'bold'), { type: 'bold' }] })))];
+        if (ctx === 'doc' || ctx === 'blockquote') {
+          const level = Math.min(3, Number(n.token.tag.slice(1)) || 2);
+          into.push(this.token('heading_open', 1, { level }), this.inlineToken(inline), this.token('heading_close', -1));
+        } else {
+          const words = inline.filter((t) => t.type !== 'strong_open' && t.type !== 'strong_close');
+          this.paragraph(into, [this.token('strong_open', 1), ...words, this.token('strong_close', -1)]);
+        }
+        return;
       }
       case 'bullet_list':
       case 'ordered_list': {
-        const items = n.children
-          .filter((c) => c.type === 'list_item')
-          .map((c) => {
-            const content = this.blocks(c.children, 'listItem');
-            if (content[0]?.type !== 'paragraph') content.unshift({ type: 'paragraph' });
-            return { type: 'listItem', content };
-          });
-        if (!items.length) return [];
-        if (n.type === 'bullet_list') return [{ type: 'bulletList', content: items }];
+        const items = n.children.filter((c) => c.type === 'list_item');
+        if (!items.length) return;
         const start = Number(n.token.attrGet('start') ?? 1);
-        return [{ type: 'orderedList', attrs: { start: Number.isInteger(start) && start >= 0 && start <= 100_000 ? start : 1, type: null }, content: items }];
+        into.push(
+          n.type === 'bullet_list'
+            ? this.token('bullet_list_open', 1)
+            : this.token('ordered_list_open', 1, { start: Number.isInteger(start) && start >= 0 && start <= 100_000 ? start : 1 }),
+        );
+        for (const item of items) {
+          const content: Token[] = [];
+          this.blocks(item.children, 'listItem', content);
+          // A list item opens with a paragraph, if only an empty one.
+          if (content[0]?.type !== 'paragraph_open') {
+            const empty: Token[] = [];
+            this.paragraph(empty, []);
+            content.unshift(...empty);
+          }
+          into.push(this.token('list_item_open', 1), ...content, this.token('list_item_close', -1));
+        }
+        into.push(this.token(`${n.type}_close`, -1));
+        return;
       }
       case 'blockquote':
-        return this.quote(n, ctx);
+        this.quote(n, ctx, into);
+        return;
       case 'hr':
-        return ctx === 'callout' ? [] : [{ type: 'horizontalRule' }];
+        if (ctx !== 'callout') into.push(this.token('hr', 0));
+        return;
       case 'table':
         // No table node in the write-up (the cut list is the table): rows become lines of text.
-        return this.tableRows(n).map((cells) => paragraph(cells.flatMap((c, i) => (i ? [{ type: 'text', text: ' | ' }, ...c] : c))));
+        for (const cells of this.tableRows(n))
+          this.paragraph(
+            into,
+            cells.flatMap((c, i) => (i ? [this.textToken(' | '), ...c] : c)),
+          );
+        return;
       case 'fence':
       case 'code_block': {
         const lines = n.token.content.replace(/\n$/, '').split('\n');
-        const inline = lines.flatMap((l, i) => [...(i ? [{ type: 'hardBreak' }] : []), ...(l ? [{ type: 'text', text: l }] : [])]);
-        return inline.some((i) => i.type === 'text') ? [paragraph(inline)] : [];
+        const inline = lines.flatMap((l, i) => [...(i ? [this.token('hardbreak', 0)] : []), ...(l ? [this.textToken(l)] : [])]);
+        if (inline.some((t) => t.type === 'text')) this.paragraph(into, inline);
+        return;
       }
       default:
-        // html_block and anything unknown: dropped.
-        return [];
+      // html_block and anything unknown: dropped.
     }
   }
 
-  private tableRows(n: TreeNode): JSONContent[][][] {
-    const rows: JSONContent[][][] = [];
+  private tableRows(n: TreeNode): Token[][][] {
+    const rows: Token[][][] = [];
     const walk = (t: TreeNode) => {
-      if (t.type === 'tr') rows.push(t.children.filter((c) => c.type === 'th' || c.type === 'td').map((c) => readInline(c.children[0]?.token.children ?? null).inline));
+      if (t.type === 'tr') rows.push(t.children.filter((c) => c.type === 'th' || c.type === 'td').map((c) => this.inlineOf(c).inline));
       else t.children.forEach(walk);
     };
     walk(n);
     return rows.filter((r) => r.some((c) => c.length));
   }
 
-  private quote(n: TreeNode, ctx: Context): JSONContent[] {
+  private quote(n: TreeNode, ctx: Context, into: Token[]): void {
     const [first] = n.children;
     if ((ctx === 'doc' || ctx === 'step') && first?.type === 'paragraph') {
       // markdown-it leaves empty text tokens around delimiters.
       const tokens = (first.children[0]?.token.children ?? []).filter((t) => !(t.type === 'text' && t.content === ''));
       const kind = this.calloutKind(tokens);
       if (kind) {
-        const { inline } = readInline(tokens.slice(3));
+        const { inline } = this.inline(tokens.slice(3));
         // "**Tip**: text" as well as "**Tip:** text".
-        if (inline[0]?.type === 'text' && !inline[0].marks) inline[0].text = inline[0].text!.replace(/^:\s*/, '');
-        if (inline[0]?.type === 'text' && !inline[0].text) inline.shift();
-        const content = [...(inline.length ? [paragraph(inline)] : []), ...this.blocks(n.children.slice(1), 'callout')];
-        return [{ type: kind, content: content.length ? content : [{ type: 'paragraph' }] }];
+        if (inline[0]?.type === 'text') inline[0].content = inline[0].content.replace(/^:\s*/, '');
+        if (inline[0]?.type === 'text' && !inline[0].content) inline.shift();
+        const content: Token[] = [];
+        if (inline.some((t) => t.type === 'text' || t.type === 'hardbreak')) this.paragraph(content, inline);
+        this.blocks(n.children.slice(1), 'callout', content);
+        if (!content.length) this.paragraph(content, []);
+        into.push(this.token(`${kind}_open`, 1), ...content, this.token(`${kind}_close`, -1));
+        return;
       }
     }
-    if (ctx === 'callout') return this.blocks(n.children, 'callout');
-    const content = this.blocks(n.children, 'blockquote');
-    return content.length ? [{ type: 'blockquote', content }] : [];
+    if (ctx === 'callout') return this.blocks(n.children, 'callout', into);
+    const content: Token[] = [];
+    this.blocks(n.children, 'blockquote', content);
+    if (content.length) into.push(this.token('blockquote_open', 1), ...content, this.token('blockquote_close', -1));
   }
 
   /** "**Tip:**" or "**Caution:**" opening a quote. */
@@ -494,15 +576,54 @@ class MdReader {
   }
 }
 
+/** The markdown-it core rule that turns our conventions into our tokens (see the top of this file). */
+function writeUpRule(state: StateCore): void {
+  const writer = new TokenWriter(state);
+  writer.doc(buildTree(state.tokens));
+  state.tokens = writer.out;
+}
+
+// html: true only so the comment markers arrive as tokens; every other HTML token is dropped.
+const tokenizer = new MarkdownIt({ html: true, linkify: false, typographer: false });
+tokenizer.core.ruler.push('cardwright_write_up', writeUpRule);
+
+const meta = (t: Token) => t.meta as Record<string, unknown>;
+
+/** Every token `writeUpRule` leaves, mapped to the write-up's nodes and marks. */
+const TOKENS: ConstructorParameters<typeof MarkdownParser>[2] = {
+  paragraph: { block: 'paragraph' },
+  heading: { block: 'heading', getAttrs: (t) => ({ level: meta(t).level }) },
+  blockquote: { block: 'blockquote' },
+  bullet_list: { block: 'bulletList' },
+  ordered_list: { block: 'orderedList', getAttrs: (t) => ({ start: meta(t).start, type: null }) },
+  list_item: { block: 'listItem' },
+  hr: { node: 'horizontalRule' },
+  hardbreak: { node: 'hardBreak' },
+  strong: { mark: 'bold' },
+  em: { mark: 'italic' },
+  s: { mark: 'strike' },
+  link: { mark: 'link', getAttrs: (t) => ({ href: t.attrGet('href'), title: t.attrGet('title') || null }) },
+  step: { block: 'step', getAttrs: (t) => meta(t) },
+  step_title: { block: 'stepTitle' },
+  tip: { block: 'tip' },
+  caution: { block: 'caution' },
+  still: { node: 'still', getAttrs: (t) => meta(t) },
+  cut_list: { node: 'cutList', getAttrs: (t) => meta(t) },
+  supply_list: { node: 'supplyList', getAttrs: (t) => meta(t) },
+};
+
+let parser: MarkdownParser | undefined;
+
 /**
  * Reads Markdown into a write-up document (see the conventions at the top of this file).
  * Raw HTML is dropped, unsafe links lose their address, unsafe images are left out; the
  * result passes `validateDoc`.
  */
 export function markdownToDoc(markdown: string): JSONContent {
-  const tree = buildTree(md.parse(String(markdown ?? ''), {}));
-  const content = new MdReader().doc(tree);
-  const result = validateDoc({ type: 'doc', content: content.length ? content : [{ type: 'paragraph' }] }, { strip: true });
+  // prosemirror-markdown types its tokenizer with its own markdown-it; the parser only calls parse().
+  parser ??= new MarkdownParser(getEditorSchema(), tokenizer as unknown as ConstructorParameters<typeof MarkdownParser>[1], TOKENS);
+  const json = parser.parse(String(markdown ?? '')).toJSON() as JSONContent;
+  const result = validateDoc(json, { strip: true });
   if (!result.ok) throw new Error(`Markdown did not fit the write-up schema: ${result.error}`);
   return result.doc;
 }

@@ -21,7 +21,13 @@ const DOC: JSONContent = {
   type: 'doc',
   content: [
     h(1, 'Hexagon treat box'),
-    p(t('A six-sided box with a '), t('lift-off', [{ type: 'italic' }]), t(' lid. See '), t('the template', [{ type: 'link', attrs: { href: '/t/hexagon#template' } }]), t('.')),
+    p(
+      t('A six-sided box with a '),
+      t('lift-off', [{ type: 'italic' }]),
+      t(' lid. See '),
+      t('the template', [{ type: 'link', attrs: { href: '/t/hexagon#template' } }]),
+      t('.'),
+    ),
     h(2, 'Supplies'),
     { type: 'supplyList', attrs: { grouped: true } },
     h(2, 'Cut list'),
@@ -31,7 +37,10 @@ const DOC: JSONContent = {
       'Score the wall strip',
       192_000,
       p(t('Score at 2 in, 4 in and 6 in.')),
-      { type: 'still', attrs: { stillId: 's1', src: '/media/stills/s1.jpg', alt: 'Strip on the scoring board', caption: 'Scored strip', width: 1280, height: 720 } },
+      {
+        type: 'still',
+        attrs: { stillId: 's1', src: '/media/stills/s1.jpg', alt: 'Strip on the scoring board', caption: 'Scored strip', width: 1280, height: 720 },
+      },
       { type: 'tip', content: [p(t('A bone folder gives a '), t('crisp', [{ type: 'bold' }]), t(' fold.'))] },
     ),
     step('', null, p(t('Glue the base on.'))),
@@ -41,7 +50,18 @@ const DOC: JSONContent = {
 
 const PIECES: RenderPiece[] = [
   // 10 9/16 in = 268.2875 mm and 4 1/4 in = 107.95 mm (1 in = 25.4 mm exactly, NIST SP 811 Appendix B).
-  { name: 'Wall strip', material: 'Kraft cardstock', quantity: 1, shape: 'rect', width: '10 9/16 in', height: '4 1/4 in', widthMm: 268.2875, heightMm: 107.95, scoreLines: ['2 in', '4 in', '6 in'], notes: 'Grain along the strip' },
+  {
+    name: 'Wall strip',
+    material: 'Kraft cardstock',
+    quantity: 1,
+    shape: 'rect',
+    width: '10 9/16 in',
+    height: '4 1/4 in',
+    widthMm: 268.2875,
+    heightMm: 107.95,
+    scoreLines: ['2 in', '4 in', '6 in'],
+    notes: 'Grain along the strip',
+  },
   { name: 'Lid', material: 'Patterned paper', quantity: 2, shape: 'circle', width: '3 in', height: '3 in', widthMm: 76.2, heightMm: 76.2, scoreLines: [] },
 ];
 const SUPPLIES: RenderSupply[] = [
@@ -72,7 +92,12 @@ describe('renderDocHtml', () => {
   });
 
   it('keeps the headings and intro in order', () => {
-    expect([...body.querySelectorAll('h1, h2')].map((e) => `${e.tagName}:${e.textContent}`)).toEqual(['H1:Hexagon treat box', 'H2:Supplies', 'H2:Cut list', 'H2:Steps']);
+    expect([...body.querySelectorAll('h1, h2')].map((e) => `${e.tagName}:${e.textContent}`)).toEqual([
+      'H1:Hexagon treat box',
+      'H2:Supplies',
+      'H2:Cut list',
+      'H2:Steps',
+    ]);
     expect(body.querySelector('p')!.innerHTML).toBe('A six-sided box with a <em>lift-off</em> lid. See <a href="/t/hexagon#template">the template</a>.');
   });
 
@@ -81,7 +106,12 @@ describe('renderDocHtml', () => {
     expect(items).toHaveLength(2);
     expect(items.map((li) => li.querySelector('h3')!.textContent)).toEqual(['Score the wall strip', 'Step 2']);
     const img = items[0]!.querySelector('figure > img')!;
-    expect([img.getAttribute('src'), img.getAttribute('alt'), img.getAttribute('width'), img.getAttribute('height')]).toEqual(['/media/stills/s1.jpg', 'Strip on the scoring board', '1280', '720']);
+    expect([img.getAttribute('src'), img.getAttribute('alt'), img.getAttribute('width'), img.getAttribute('height')]).toEqual([
+      '/media/stills/s1.jpg',
+      'Strip on the scoring board',
+      '1280',
+      '720',
+    ]);
     expect(items[0]!.querySelector('figcaption')!.textContent).toBe('Scored strip');
     // W3C Media Fragments URI 1.0, temporal dimension: #t=<seconds>; 192 s is 3:12.
     const watch = items[0]!.querySelector('.cw-step-time a')!;
@@ -108,7 +138,8 @@ describe('renderDocHtml', () => {
   });
 
   it('shows one system only when the node asks for it', () => {
-    const only = (units: string) => parse(renderDocHtml({ type: 'doc', content: [{ type: 'cutList', attrs: { units } }] }, CTX)).querySelector('tbody td:nth-child(4)')!.textContent;
+    const only = (units: string) =>
+      parse(renderDocHtml({ type: 'doc', content: [{ type: 'cutList', attrs: { units } }] }, CTX)).querySelector('tbody td:nth-child(4)')!.textContent;
     expect(only('in')).toBe('10 9/16 x 4 1/4 in');
     expect(only('mm')).toBe('268.3 x 108 mm');
   });
@@ -120,12 +151,15 @@ describe('renderDocHtml', () => {
     const sponsored = s.querySelector('a[href="https://shop.example/kraft"]')!;
     // Google Search Central, "Qualify your outbound links": rel="sponsored" for paid links.
     expect(sponsored.getAttribute('rel')).toBe('sponsored noopener');
-    expect(sponsored.parentElement!.textContent).toBe('Kraft cardstock (2 sheets) (discount code KRAFT10)');
+    // The tag sits beside the item itself, not only in the disclosure above the list.
+    expect(sponsored.parentElement!.textContent).toBe('Kraft cardstock (sponsored link) (2 sheets) (discount code KRAFT10)');
     expect(s.querySelector('a[href="https://other.example/tape"]')!.hasAttribute('rel')).toBe(false);
     expect(s.querySelector('a[href="https://other.example/tape"]')!.parentElement!.textContent).toBe('Tape runner — permanent');
     // FTC Endorsement Guides (16 CFR 255): a clear and conspicuous disclosure, here ahead of the links.
     expect(s.firstElementChild!.className).toBe('cw-disclosure');
-    expect(parse(renderDocHtml(DOC, { ...CTX, disclosure: 'Kraft cardstock was sent to me by the shop.' })).querySelector('.cw-disclosure')!.textContent).toBe('Kraft cardstock was sent to me by the shop.');
+    expect(parse(renderDocHtml(DOC, { ...CTX, disclosure: 'Kraft cardstock was sent to me by the shop.' })).querySelector('.cw-disclosure')!.textContent).toBe(
+      'Kraft cardstock was sent to me by the shop.',
+    );
   });
 
   it('leaves the disclosure out when no link is sponsored, and the live lists out when empty', () => {
@@ -151,8 +185,19 @@ describe('renderDocHtml', () => {
   it('escapes every text and attribute', () => {
     const nasty = '<script>alert("x")</script> & "quotes"';
     const out = renderDocHtml(
-      { type: 'doc', content: [p(t(nasty)), { type: 'still', attrs: { src: '/media/a.jpg', alt: '" onerror="alert(1)', caption: '<b>cap</b>' } }, { type: 'cutList' }, { type: 'supplyList' }] },
-      { pieces: [{ ...PIECES[0]!, name: '<img src=x onerror=alert(1)>' }], supplies: [{ category: '<i>odd</i>', name: '"><script>', url: 'https://shop.example/?a=1&b=2' }] },
+      {
+        type: 'doc',
+        content: [
+          p(t(nasty)),
+          { type: 'still', attrs: { src: '/media/a.jpg', alt: '" onerror="alert(1)', caption: '<b>cap</b>' } },
+          { type: 'cutList' },
+          { type: 'supplyList' },
+        ],
+      },
+      {
+        pieces: [{ ...PIECES[0]!, name: '<img src=x onerror=alert(1)>' }],
+        supplies: [{ category: '<i>odd</i>', name: '"><script>', url: 'https://shop.example/?a=1&b=2' }],
+      },
     );
     expect(out).not.toMatch(/<script|<img src=x|<b>|<i>/);
     expect(out).toContain('&lt;script&gt;alert(&quot;x&quot;)&lt;/script&gt; &amp; &quot;quotes&quot;');
@@ -161,8 +206,13 @@ describe('renderDocHtml', () => {
   });
 
   it('lets a publisher swap stills for resized copies, still checking the address', () => {
-    const d: JSONContent = { type: 'doc', content: [{ type: 'still', attrs: { stillId: 's1', src: '/media/stills/s1.jpg', alt: 'A', caption: '', width: 1920, height: 1080 } }] };
-    const resized = parse(renderDocHtml(d, { resolveStill: (s) => ({ ...s, src: '/media/export/s1-800.jpg', width: 800, height: 450 }) })).querySelector('img')!;
+    const d: JSONContent = {
+      type: 'doc',
+      content: [{ type: 'still', attrs: { stillId: 's1', src: '/media/stills/s1.jpg', alt: 'A', caption: '', width: 1920, height: 1080 } }],
+    };
+    const resized = parse(renderDocHtml(d, { resolveStill: (s) => ({ ...s, src: '/media/export/s1-800.jpg', width: 800, height: 450 }) })).querySelector(
+      'img',
+    )!;
     expect([resized.getAttribute('src'), resized.getAttribute('width'), resized.getAttribute('height')]).toEqual(['/media/export/s1-800.jpg', '800', '450']);
     expect(renderDocHtml(d, { resolveStill: (s) => ({ ...s, src: 'javascript:alert(1)' }) })).toBe('');
     expect(renderDocHtml(d, { resolveStill: () => null })).toBe('');
@@ -180,7 +230,12 @@ describe('formatMmNumber', () => {
 
   it('agrees with mathjs unit conversion for the cut-list sizes', () => {
     // Cross-check against a reference library: mathjs converts with its own inch definition.
-    for (const [inches, shown] of [[10.5625, '268.3'], [3, '76.2'], [12, '304.8'], [8.5, '215.9']] as const) {
+    for (const [inches, shown] of [
+      [10.5625, '268.3'],
+      [3, '76.2'],
+      [12, '304.8'],
+      [8.5, '215.9'],
+    ] as const) {
       expect(formatMmNumber(unit(inches, 'inch').toNumber('mm'))).toBe(shown);
     }
   });

@@ -1,14 +1,5 @@
 import type { JSONContent } from '@tiptap/core';
-import {
-  CALLOUT_LABELS,
-  DEFAULT_DISCLOSURE,
-  groupSupplies,
-  inchSize,
-  mmSize,
-  plainText,
-  supplyDetails,
-  timeLink,
-} from './render-parts';
+import { CALLOUT_LABELS, DEFAULT_DISCLOSURE, groupSupplies, inchSize, mmSize, plainText, sponsoredTag, supplyDetails, timeLink } from './render-parts';
 import type { CutListUnits, RenderContext, RenderPiece, RenderSupply, StillAttrs } from './types';
 import { isSafeImageSrc, isSafeLinkHref } from './urls';
 
@@ -130,7 +121,10 @@ class HtmlRenderer {
   }
 
   private items(nodes: readonly JSONContent[] | undefined): string {
-    return (nodes ?? []).filter((n) => n.type === 'listItem').map((n) => `<li>${this.blocks(n.content)}</li>`).join('');
+    return (nodes ?? [])
+      .filter((n) => n.type === 'listItem')
+      .map((n) => `<li>${this.blocks(n.content)}</li>`)
+      .join('');
   }
 
   private step(n: JSONContent): string {
@@ -181,12 +175,22 @@ class HtmlRenderer {
       return `${escapeHtml(inchSize(p))} <span class="cw-mm">(${escapeHtml(mmSize(p))})</span>`;
     };
     const rows = pieces.map((p) => {
-      const cells = [`<th scope="row">${escapeHtml(p.name)}</th>`, `<td>${escapeHtml(p.material)}</td>`, `<td>${escapeHtml(String(p.quantity))}</td>`, `<td>${size(p)}</td>`];
-      if (withScores) cells.push(`<td>${escapeHtml((p.scoreLines ?? []).join(', '))}</td>`);
-      if (withNotes) cells.push(`<td>${escapeHtml(p.notes?.trim() ?? '')}</td>`);
+      // data-label lets a narrow page show each row as a card with the column names beside the values.
+      const td = (label: string, html: string) => `<td data-label="${label}">${html}</td>`;
+      const cells = [
+        `<th scope="row">${escapeHtml(p.name)}</th>`,
+        td('Material', escapeHtml(p.material)),
+        td('Qty', escapeHtml(String(p.quantity))),
+        td('Size', size(p)),
+      ];
+      if (withScores) cells.push(td('Score lines', escapeHtml((p.scoreLines ?? []).join(', '))));
+      if (withNotes) cells.push(td('Notes', escapeHtml(p.notes?.trim() ?? '')));
       return `<tr>${cells.join('')}</tr>`;
     });
-    const note = this.ctx.precision && show !== 'mm' ? `<p class="cw-note">Inch sizes are given to the nearest 1/${this.ctx.precision} in; millimetres to 0.1 mm.</p>` : '';
+    const note =
+      this.ctx.precision && show !== 'mm'
+        ? `<p class="cw-note">Inch sizes are given to the nearest 1/${this.ctx.precision} in; millimetres to 0.1 mm.</p>`
+        : '';
     return `<div class="cw-cut-list"><table><thead><tr>${head.map((h) => `<th scope="col">${h}</th>`).join('')}</tr></thead><tbody>${rows.join('')}</tbody></table>${note}</div>`;
   }
 
@@ -198,7 +202,8 @@ class HtmlRenderer {
       const rel = s.sponsored ? 'sponsored noopener' : null;
       const name = s.url && isSafeLinkHref(s.url) ? `<a${attrs({ href: s.url, rel })}>${escapeHtml(s.name)}</a>` : escapeHtml(s.name);
       const code = d.code ? ` (discount code <strong>${escapeHtml(d.code)}</strong>)` : '';
-      return `<li>${name}${escapeHtml(d.quantity + d.note)}${code}</li>`;
+      const tag = sponsoredTag(s) ? ` <span class="cw-sponsored">${escapeHtml(sponsoredTag(s).trim())}</span>` : '';
+      return `<li>${name}${tag}${escapeHtml(d.quantity + d.note)}${code}</li>`;
     };
     const sponsored = supplies.some((s) => s.sponsored && s.url && isSafeLinkHref(s.url));
     // Before the links, where a reader sees it first (FTC Endorsement Guides, 16 CFR 255: clear and conspicuous).

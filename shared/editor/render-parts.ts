@@ -4,9 +4,11 @@
  */
 import type { JSONContent } from '@tiptap/core';
 import { formatTimestamp } from '../transcript/timestamp';
+import { SHAPE_LABELS } from '../geometry/shapes';
+import { ROUND_SHAPES } from '../measure/piece';
 import type { RenderPiece, RenderSupply } from './types';
 import { SUPPLY_CATEGORIES } from './types';
-import { isSafeVideoUrl } from './urls';
+import { isSafeLinkHref, isSafeVideoUrl } from './urls';
 
 export const CATEGORY_LABELS: Record<string, string> = {
   paper: 'Paper',
@@ -47,18 +49,21 @@ export function formatMmNumber(mm: number): string {
 
 const UNIT_SUFFIX = / ([a-z]+)$/;
 
-/** "4 1/4 x 5 1/2 in" from "4 1/4 in" and "5 1/2 in"; a circle is its diameter ("3 in circle"). */
+/** " oval", " rounded rectangle": what follows a size for shapes other than a rectangle. */
+const shapeSuffix = (p: RenderPiece) => (p.shape === 'rect' ? '' : ` ${SHAPE_LABELS[p.shape]}`);
+
+/** "4 1/4 x 5 1/2 in" from "4 1/4 in" and "5 1/2 in"; a circle is its diameter ("3 in circle"); other shapes say theirs ("4 x 3 in oval"). */
 export function inchSize(p: RenderPiece): string {
-  if (p.shape === 'circle') return `${p.width} circle`;
+  if (ROUND_SHAPES.includes(p.shape)) return `${p.width}${shapeSuffix(p)}`;
   const wu = UNIT_SUFFIX.exec(p.width)?.[1];
   const hu = UNIT_SUFFIX.exec(p.height)?.[1];
-  return wu && wu === hu ? `${p.width.slice(0, -wu.length - 1)} x ${p.height}` : `${p.width} x ${p.height}`;
+  return (wu && wu === hu ? `${p.width.slice(0, -wu.length - 1)} x ${p.height}` : `${p.width} x ${p.height}`) + shapeSuffix(p);
 }
 
-/** "108 x 139.7 mm", "76.2 mm circle". */
+/** "108 x 139.7 mm", "76.2 mm circle", "101.6 x 76.2 mm oval". */
 export function mmSize(p: RenderPiece): string {
-  if (p.shape === 'circle') return `${formatMmNumber(p.widthMm)} mm circle`;
-  return `${formatMmNumber(p.widthMm)} x ${formatMmNumber(p.heightMm)} mm`;
+  if (ROUND_SHAPES.includes(p.shape)) return `${formatMmNumber(p.widthMm)} mm${shapeSuffix(p)}`;
+  return `${formatMmNumber(p.widthMm)} x ${formatMmNumber(p.heightMm)} mm${shapeSuffix(p)}`;
 }
 
 /** Supplies grouped in the category order of DESIGN.md W4, unknown categories after, by name. */
@@ -66,13 +71,25 @@ export function groupSupplies(supplies: readonly RenderSupply[]): { category: st
   const order = new Map<string, number>(SUPPLY_CATEGORIES.map((c, i) => [c, i]));
   const groups = new Map<string, RenderSupply[]>();
   for (const s of supplies) {
-    const key = String(s.category ?? '').trim().toLowerCase() || 'other';
+    const key =
+      String(s.category ?? '')
+        .trim()
+        .toLowerCase() || 'other';
     if (!groups.has(key)) groups.set(key, []);
     groups.get(key)!.push(s);
   }
   return [...groups.entries()]
     .sort(([a], [b]) => (order.get(a) ?? 99) - (order.get(b) ?? 99) || a.localeCompare(b))
     .map(([category, items]) => ({ category, label: CATEGORY_LABELS[category] ?? category.charAt(0).toUpperCase() + category.slice(1), items }));
+}
+
+/**
+ * The tag every output puts right after a sponsored supply's name, so a reader sees which link
+ * pays before following it (FTC Endorsement Guides, 16 CFR 255: disclose next to the endorsement).
+ */
+export function sponsoredTag(s: Pick<RenderSupply, 'sponsored' | 'url'>): string {
+  // Only a link that is shown: an unsafe address is dropped from every output, and so is its tag.
+  return s.sponsored && s.url && isSafeLinkHref(s.url) ? ' (sponsored link)' : '';
 }
 
 /** Text after a supply's name: " (2 sheets) — for the base (discount code PAPER10)". */

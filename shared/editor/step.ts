@@ -1,4 +1,5 @@
 import { Node } from '@tiptap/core';
+import { newStepId } from './step-ids';
 import type { StepAttrs } from './types';
 
 declare module '@tiptap/core' {
@@ -40,6 +41,15 @@ export const Step = Node.create({
   isolating: true,
   addAttributes() {
     return {
+      // A stable id, so comments can point at a step wherever it moves (see step-ids.ts).
+      id: {
+        default: null,
+        parseHTML: (el: HTMLElement) => {
+          const v = el.getAttribute('data-step-id');
+          return v !== null && ID.test(v) ? v : null;
+        },
+        renderHTML: (attrs: Record<string, unknown>) => (typeof attrs.id === 'string' ? { 'data-step-id': attrs.id } : {}),
+      },
       atMs: {
         default: null,
         parseHTML: (el: HTMLElement) => {
@@ -69,10 +79,10 @@ export const Step = Node.create({
       insertStep:
         (options = {}) =>
         ({ commands }) => {
-          const { title, atMs = null, chapterId = null } = options;
+          const { title, atMs = null, chapterId = null, id = newStepId() } = options;
           return commands.insertContent({
             type: this.name,
-            attrs: { atMs, chapterId },
+            attrs: { id, atMs, chapterId },
             content: [{ type: 'stepTitle', content: title ? [{ type: 'text', text: title }] : [] }, { type: 'paragraph' }],
           });
         },

@@ -4,6 +4,7 @@
  * and Supplies sections when a document is rendered, so an edit there shows up everywhere.
  */
 
+import type { PieceShape } from '../measure/piece';
 import { SUPPLY_CATEGORIES } from '../schemas/supply';
 
 /** Names of the nodes this project adds to the Tiptap schema. */
@@ -12,6 +13,8 @@ export type ArticleNodeName = (typeof ARTICLE_NODE_NAMES)[number];
 
 /** `step`: one numbered step. Its number is its position among the document's steps. */
 export interface StepAttrs {
+  /** A stable id that comments anchor to; unique within the document. */
+  id: string | null;
   /** Where the step starts in the video, in milliseconds; null when it has no time. */
   atMs: number | null;
   /** The chapter the step was drafted from, if any. */
@@ -50,7 +53,7 @@ export interface RenderPiece {
   name: string;
   material: string;
   quantity: number;
-  shape: 'rect' | 'circle';
+  shape: PieceShape;
   /** Display form, e.g. "4 1/4 in"; for a circle, its diameter. */
   width: string;
   /** Display form; ignored for a circle. */

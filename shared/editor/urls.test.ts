@@ -2,10 +2,15 @@ import { describe, expect, it } from 'vitest';
 import { isSafeImageSrc, isSafeLinkHref, isSafeVideoUrl } from './urls';
 
 describe('isSafeLinkHref', () => {
-  it.each(['https://shop.example/kraft-cardstock', 'http://shop.example/', 'mailto:team@studio.example', '/tutorials/hexagon-box', '#step-3', 'gatefold-card.html', '?page=2'])(
-    'keeps %s (http(s), mailto and relative references)',
-    (href) => expect(isSafeLinkHref(href)).toBe(true),
-  );
+  it.each([
+    'https://shop.example/kraft-cardstock',
+    'http://shop.example/',
+    'mailto:team@studio.example',
+    '/tutorials/hexagon-box',
+    '#step-3',
+    'gatefold-card.html',
+    '?page=2',
+  ])('keeps %s (http(s), mailto and relative references)', (href) => expect(isSafeLinkHref(href)).toBe(true));
 
   // OWASP XSS Filter Evasion Cheat Sheet: script URLs in every disguise that reaches a URL as text.
   it.each([
@@ -20,6 +25,9 @@ describe('isSafeLinkHref', () => {
     'data:text/html;base64,PHNjcmlwdD5hbGVydCgxKTwvc2NyaXB0Pg==',
     'file:///etc/passwd',
     'livescript:alert(1)',
+    '//evil.example/steal', // protocol-relative: another site without naming a scheme
+    '/\\evil.example/steal', // browsers read a backslash as a slash in http(s) addresses (WHATWG URL Standard)
+    '\\\\evil.example/steal',
   ])('refuses %j', (href) => expect(isSafeLinkHref(href)).toBe(false));
 
   it('refuses non-strings and over-long addresses', () => {

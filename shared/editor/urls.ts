@@ -10,6 +10,7 @@ const WEB_SCHEMES = new Set(['http:', 'https:']);
 // Browsers drop tab and line breaks inside URLs ("jav\tascript:"), and trim C0 controls and
 // spaces at the ends (WHATWG URL Standard, basic URL parser), so any of these is refused
 // outright instead of guessing what a browser would make of it.
+// eslint-disable-next-line no-control-regex -- matching controls is the point
 const CONTROL_OR_EDGE_SPACE = /[\u0000-\u001F\u007F]|^\s|\s$/;
 const SCHEME = /^([a-zA-Z][a-zA-Z0-9+.-]*):/;
 // Only used to resolve relative references; never fetched.
@@ -30,7 +31,9 @@ function plain(value: unknown): value is string {
 /**
  * True for a link address the document may keep: http(s), mailto, or a relative reference
  * ("/tutorials/x", "#step-3", "page.html"). Everything else (javascript:, data:, vbscript:,
- * file:, addresses with control characters) is refused.
+ * file:, addresses with control characters) is refused, and so is a "relative" reference that
+ * leaves the page's own site ("//host", "/\\host"), as the HTML import refuses it: a link to
+ * another site names its scheme.
  */
 export function isSafeLinkHref(href: unknown): href is string {
   if (!plain(href)) return false;
@@ -38,7 +41,8 @@ export function isSafeLinkHref(href: unknown): href is string {
   if (scheme && !LINK_SCHEMES.has(`${scheme[1]!.toLowerCase()}:`)) return false;
   // Cross-check with the WHATWG parser the browser itself uses.
   const url = parse(href, BASE);
-  return url !== null && LINK_SCHEMES.has(url.protocol);
+  if (url === null || !LINK_SCHEMES.has(url.protocol)) return false;
+  return scheme !== null || url.origin === new URL(BASE).origin;
 }
 
 /**

@@ -8,7 +8,10 @@ const step = (title: string, body: JSONContent[] = [], attrs: Record<string, unk
   attrs,
   content: [{ type: 'stepTitle', content: [{ type: 'text', text: title }] }, ...body],
 });
-const para = (text: string, marks?: JSONContent['marks']): JSONContent => ({ type: 'paragraph', content: [{ type: 'text', text, ...(marks ? { marks } : {}) }] });
+const para = (text: string, marks?: JSONContent['marks']): JSONContent => ({
+  type: 'paragraph',
+  content: [{ type: 'text', text, ...(marks ? { marks } : {}) }],
+});
 const doc = (...content: JSONContent[]): JSONContent => ({ type: 'doc', content });
 
 function refused(json: unknown): string {
@@ -42,14 +45,25 @@ describe('validateDoc accepts', () => {
         { type: 'heading', attrs: { level: 1 }, content: [{ type: 'text', text: 'Round gift box' }] },
         { type: 'supplyList' },
         { type: 'cutList', attrs: { units: 'mm' } },
-        step('Wrap the wall', [para('Wrap the strip.'), { type: 'still', attrs: { src: '/media/stills/a.jpg', alt: 'The strip around the base' } }, { type: 'tip', content: [para('Go slowly.')] }]),
+        step('Wrap the wall', [
+          para('Wrap the strip.'),
+          { type: 'still', attrs: { src: '/media/stills/a.jpg', alt: 'The strip around the base' } },
+          { type: 'tip', content: [para('Go slowly.')] },
+        ]),
         { type: 'caution', content: [para('Mind the blade.')] },
       ),
     );
     expect(r.ok).toBe(true);
     if (!r.ok) return;
     expect(r.doc.content![1]).toEqual({ type: 'supplyList', attrs: { grouped: true } });
-    expect(r.doc.content![3]!.content![2]!.attrs).toEqual({ stillId: null, src: '/media/stills/a.jpg', alt: 'The strip around the base', caption: '', width: null, height: null });
+    expect(r.doc.content![3]!.content![2]!.attrs).toEqual({
+      stillId: null,
+      src: '/media/stills/a.jpg',
+      alt: 'The strip around the base',
+      caption: '',
+      width: null,
+      height: null,
+    });
   });
 
   it('drops attributes the schema does not know (event handlers included)', () => {

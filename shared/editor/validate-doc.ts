@@ -63,8 +63,14 @@ const NODE_CHECKS: Record<string, (a: Attrs) => Check> = {
     const why = problems([
       [atOk, 'step time (atMs) must be a whole number of milliseconds or null'],
       [isId(a.chapterId), 'chapterId must be a short id or null'],
+      [isId(a.id), 'a step id must be a short id or null'],
     ]);
-    return why ? { error: why, fallback: { atMs: atOk ? (a.atMs ?? null) : null, chapterId: isId(a.chapterId) ? (a.chapterId ?? null) : null } } : { attrs: { atMs: a.atMs ?? null, chapterId: a.chapterId ?? null } };
+    const fallback = {
+      id: isId(a.id) ? (a.id ?? null) : null,
+      atMs: atOk ? (a.atMs ?? null) : null,
+      chapterId: isId(a.chapterId) ? (a.chapterId ?? null) : null,
+    };
+    return why ? { error: why, fallback } : { attrs: { id: a.id ?? null, atMs: a.atMs ?? null, chapterId: a.chapterId ?? null } };
   },
   still(a) {
     if (!isSafeImageSrc(a.src)) return { error: `still image address not allowed: ${JSON.stringify(String(a.src ?? '')).slice(0, 80)}`, fallback: 'drop' };

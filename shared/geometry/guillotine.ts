@@ -13,10 +13,7 @@ export interface LaidRect {
  * How a paper trimmer cuts a sheet into its pieces: each cut runs from edge
  * to edge of the part being cut. `at` is measured from the sheet's corner.
  */
-export type CutTree =
-  | { kind: 'piece'; index: number }
-  | { kind: 'waste' }
-  | { kind: 'cut'; axis: 'x' | 'y'; at: Fraction; first: CutTree; second: CutTree };
+export type CutTree = { kind: 'piece'; index: number } | { kind: 'waste' } | { kind: 'cut'; axis: 'x' | 'y'; at: Fraction; first: CutTree; second: CutTree };
 
 interface R {
   x0: bigint;

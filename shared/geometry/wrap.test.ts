@@ -13,7 +13,10 @@ const math = create(all, { number: 'BigNumber', precision: 100 });
 const PI = math.pi as unknown as BigNumber;
 function reference(d: Fraction, t: Fraction, n: number, o: Fraction, p: number): Fraction {
   const big = (f: Fraction) => math.bignumber(f.n.toString()).div(f.d.toString());
-  const x = PI.mul(big(d).add(big(t))).div(n).add(big(o)).mul(p);
+  const x = PI.mul(big(d).add(big(t)))
+    .div(n)
+    .add(big(o))
+    .mul(p);
   return new Fraction(BigInt(x.ceil().toFixed(0)), BigInt(p));
 }
 
@@ -34,7 +37,9 @@ describe('wrapStrip (M5)', () => {
     // pi x (4 + 0.012) = 12.6041..; sixteenths up: 12 5/8
     const r = wrapStrip({ diameter: L('4'), thickness: L('0.012'), precision: 16 });
     expect(serializeLength(r.stripLength)).toBe('101/8 in');
-    expect(serializeLength(r.stripLength)).toBe(serializeLength({ value: reference(new Fraction(4), new Fraction('0.012'), 1, new Fraction(0), 16), unit: 'in' }));
+    expect(serializeLength(r.stripLength)).toBe(
+      serializeLength({ value: reference(new Fraction(4), new Fraction('0.012'), 1, new Fraction(0), 16), unit: 'in' }),
+    );
     // a thickness given in millimetres works the same: 0.3048 mm = 0.012 in
     expect(serializeLength(wrapStrip({ diameter: L('4'), thickness: millimetres('0.3048') }).stripLength)).toBe('101/8 in');
   });

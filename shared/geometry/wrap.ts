@@ -27,7 +27,7 @@ export interface WrapResult {
 
 const ceilDiv = (n: bigint, d: bigint): bigint => {
   const q = n / d;
-  return n % d !== 0n && (n > 0n) === (d > 0n) ? q + 1n : q;
+  return n % d !== 0n && n > 0n === d > 0n ? q + 1n : q;
 };
 
 function ceilToMark(x: Fraction, p: bigint): bigint {
@@ -92,15 +92,12 @@ export function wrapStrip(input: WrapInput): WrapResult {
   working.push(`Circumference = π × ${dec(mean)} in = ${dec(circumference)} in`);
   if (n > 1) working.push(`Shared by ${n} strips: ${dec(circumference)} in ÷ ${n} = ${dec(perStrip.mul(piBounds(digits).lo))} in each`);
   if (o.n !== 0n) working.push(`Add the ${formatLength(overlap)} overlap: ${dec(lo.sub(o))} in + ${dec(o)} in = ${dec(lo)} in`);
-  working.push(`Round up to the next 1/${precision} in mark (a long strip only overlaps more; a short one leaves a gap): ${formatLength(strip)} = ${dec(strip.value)} in (${formatMm(strip)})`);
+  working.push(
+    `Round up to the next 1/${precision} in mark (a long strip only overlaps more; a short one leaves a gap): ${formatLength(strip)} = ${dec(strip.value)} in (${formatMm(strip)})`,
+  );
   const extra = strip.value.sub(lo);
-  working.push(`Cut ${n > 1 ? `each of the ${n} strips` : 'the strip'} ${formatLength(strip)}: ${dec(extra)} in (${formatMm({ value: extra, unit: 'in' }, 2)}) longer than the exact need`);
+  working.push(
+    `Cut ${n > 1 ? `each of the ${n} strips` : 'the strip'} ${formatLength(strip)}: ${dec(extra)} in (${formatMm({ value: extra, unit: 'in' }, 2)}) longer than the exact need`,
+  );
   return { stripLength: strip, unroundedInches: lo.valueOf(), extraInches: extra.valueOf(), working };
-}
-
-/** The exact circumference bounds for a diameter, for callers that need their own rounding. */
-export function circumferenceBounds(diameter: Length, digits = 40): { lo: Fraction; hi: Fraction } {
-  const d = toInches(diameter);
-  const pi = piBounds(digits);
-  return { lo: pi.lo.mul(d), hi: pi.hi.mul(d) };
 }

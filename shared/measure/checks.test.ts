@@ -28,6 +28,17 @@ describe('checkPiece: sizes on the ruler', () => {
     expect(serializeLength(cs[0]!.mark!.mark)).toBe('69/16 in');
   });
 
+  it('names the second side Length, as the cut list column does', () => {
+    const p = piece({ width: L('4'), height: L('6 1/3') });
+    const cs = checkPiece(p, { precision: 16, pieces: [p] });
+    expect(cs.map((c) => [c.field, c.reason.split(' ')[0]])).toEqual([['height', 'Length']]);
+    const zero = piece({ width: L('4'), height: L('0') });
+    expect(checkPiece(zero, { pieces: [zero] })[0]!.reason).toMatch(/needs a width and length above zero/);
+    const oval = piece({ shape: 'circle', width: L('3'), height: L('3 1/4') });
+    expect(checkPiece(oval, { pieces: [oval] })[0]!.reason).toMatch(/width and length must both be the diameter/);
+    for (const c of [...cs, ...checkPiece(zero, { pieces: [zero] }), ...checkPiece(oval, { pieces: [oval] })]) expect(c.reason).not.toMatch(/height/i);
+  });
+
   it('3/32 is fine at 32nds and off at 16ths', () => {
     const p = piece({ width: L('4 3/32'), height: L('6') });
     expect(checkPiece(p, { precision: 32, pieces: [p] })).toEqual([]);
@@ -47,7 +58,13 @@ describe('checkPiece: score lines', () => {
     const p = piece({ width: L('4'), height: L('5'), scoreLines: [{ axis: 'height', at: L('5 1/4') }] });
     const cs = checkPiece(p, { precision: 16, pieces: [p] });
     expect(cs).toHaveLength(1);
-    expect(cs[0]).toMatchObject({ code: 'score-outside', severity: 'error', reason: 'Score line at 5 1/4 in is outside the 5 in height', field: 'scoreLines.0' });
+    expect(cs[0]).toMatchObject({
+      code: 'score-outside',
+      severity: 'error',
+      // The cut list's column reads "Length", so the warning says length, not height.
+      reason: 'Score line at 5 1/4 in is outside the 5 in length',
+      field: 'scoreLines.0',
+    });
   });
 
   it('score lines closer than 1/8 in to each other or to an edge are flagged (common practice)', () => {
@@ -63,19 +80,42 @@ describe('checkPiece: score lines', () => {
     });
     const cs = checkPiece(p, { precision: 16, pieces: [p] });
     expect(codes(cs).sort()).toEqual(['score-near-edge', 'score-too-close']);
-    expect(cs.find((c) => c.code === 'score-too-close')!.reason).toBe('Score lines at 2 in and 2 1/16 in on the width are only 1/16 in apart; keep at least 1/8 in');
+    expect(cs.find((c) => c.code === 'score-too-close')!.reason).toBe(
+      'Score lines at 2 in and 2 1/16 in on the width are only 1/16 in apart; keep at least 1/8 in',
+    );
     expect(cs.find((c) => c.code === 'score-near-edge')!.reason).toContain('only 1/16 in from the edge of the 6 in width');
   });
 
   it('tab score lines may sit close (a 1/16 in tab fold is allowed)', () => {
-    const p = piece({ width: L('6'), height: L('4'), scoreLines: [{ axis: 'width', at: L('1/16'), tab: true }, { axis: 'width', at: L('1/8') }] });
+    const p = piece({
+      width: L('6'),
+      height: L('4'),
+      scoreLines: [
+        { axis: 'width', at: L('1/16'), tab: true },
+        { axis: 'width', at: L('1/8') },
+      ],
+    });
     expect(checkPiece(p, { precision: 16, pieces: [p] })).toEqual([]);
   });
 
   it('exactly 1/8 in apart is enough; the same line twice is not', () => {
-    const ok = piece({ width: L('6'), height: L('4'), scoreLines: [{ axis: 'width', at: L('2') }, { axis: 'width', at: L('2 1/8') }] });
+    const ok = piece({
+      width: L('6'),
+      height: L('4'),
+      scoreLines: [
+        { axis: 'width', at: L('2') },
+        { axis: 'width', at: L('2 1/8') },
+      ],
+    });
     expect(checkPiece(ok, { pieces: [ok] })).toEqual([]);
-    const twice = piece({ width: L('6'), height: L('4'), scoreLines: [{ axis: 'width', at: L('2') }, { axis: 'width', at: L('2') }] });
+    const twice = piece({
+      width: L('6'),
+      height: L('4'),
+      scoreLines: [
+        { axis: 'width', at: L('2') },
+        { axis: 'width', at: L('2') },
+      ],
+    });
     expect(checkPiece(twice, { pieces: [twice] })[0]!.reason).toBe('Score line at 2 in on the width is listed twice');
   });
 });
@@ -134,7 +174,11 @@ describe('checkPiece: stock sheet', () => {
   it('a piece larger than the sheet is an error', () => {
     const wall = piece({ name: 'Box wall', width: L('20 1/8'), height: L('2') });
     const cs = checkPiece(wall, { pieces: [wall], stock: sheet });
-    expect(cs[0]).toMatchObject({ code: 'larger-than-stock', severity: 'error', reason: '"Box wall" (20 1/8 x 2 in) is larger than the 12 x 12 in stock sheet, even turned' });
+    expect(cs[0]).toMatchObject({
+      code: 'larger-than-stock',
+      severity: 'error',
+      reason: '"Box wall" (20 1/8 x 2 in) is larger than the 12 x 12 in stock sheet, even turned',
+    });
   });
 
   it('fits turned only when turning is allowed', () => {
@@ -151,8 +195,37 @@ describe('checkCutList', () => {
     const mat = piece({ name: 'Mat', material: 'pattern', width: L('12 3/4'), height: L('1 3/4'), matOn: base.id });
     const cs = checkCutList([base, mat], {
       precision: 16,
-      stockFor: (material) => (material === 'kraft' ? { width: inches(12), height: inches(12), rotate: true } : { width: inches(14), height: inches(14), rotate: true }),
+      stockFor: (material) =>
+        material === 'kraft' ? { width: inches(12), height: inches(12), rotate: true } : { width: inches(14), height: inches(14), rotate: true },
     });
     expect(cs.map((c) => [c.pieceId, c.code])).toEqual([[base.id, 'larger-than-stock']]);
+  });
+});
+
+describe('checkPiece: shapes beyond rectangles and circles', () => {
+  const base = { id: 's', name: 'Tag', material: 'kraft', quantity: 1, scoreLines: [] };
+  it('checks each shape’s own sizes and puts them on the ruler', () => {
+    const tag: Piece = {
+      ...base,
+      shape: 'tag',
+      width: inches(2),
+      height: inches(4),
+      params: { tagCorner: inches([1, 3]), holeDiameter: inches([1, 4]), holeFromTop: inches([3, 16]) },
+    };
+    const found = checkPiece(tag, { pieces: [tag] });
+    expect(found.map((c) => `${c.code} ${c.field}`)).toEqual(['off-ruler params.tagCorner', 'shape-size params.holeFromTop']);
+    const round: Piece = { ...base, shape: 'rounded-rect', width: inches(2), height: inches(3), params: { cornerRadius: inches(2) } };
+    expect(checkPiece(round, { pieces: [round] }).map((c) => c.code)).toEqual(['shape-size']);
+    const scallop: Piece = { ...base, shape: 'scalloped-circle', width: inches(4), height: inches(3) };
+    expect(checkPiece(scallop, { pieces: [scallop] }).map((c) => c.code)).toEqual(['circle-not-round']);
+  });
+
+  it('a pillow box is checked against its stock by its flat blank, not the finished box', () => {
+    // 5 x 8 x 2 in box: blank 2 x 5 + 1/2 = 10 1/2 across, 8 + 2 = 10 down; it fits a 12 x 12 in sheet but not Letter.
+    const box: Piece = { ...base, name: 'Box', shape: 'pillow-box', width: inches(5), height: inches(8), params: { depth: inches(2) } };
+    expect(checkPiece(box, { pieces: [box], stock: { width: inches(12), height: inches(12), rotate: true } })).toEqual([]);
+    expect(checkPiece(box, { pieces: [box], stock: { width: inches([17, 2]), height: inches(11), rotate: true } })[0]!.reason).toBe(
+      '"Box" (5 x 8 in; its blank 10 1/2 x 10 in) is larger than the 8 1/2 x 11 in stock sheet, even turned',
+    );
   });
 });

@@ -1,5 +1,7 @@
+import { allowedOrientations, type SheetGrain } from '../geometry/grain';
+import { pieceExtent, shapeLengths, shapeProblems, SHAPE_LABELS } from '../geometry/shapes';
 import { compareLengths, formatLength, inches, subtractLengths, toInches, type Length } from './length';
-import type { Piece, ScoreAxis } from './piece';
+import { ROUND_SHAPES, type Piece, type ScoreAxis } from './piece';
 import { DEFAULT_PRECISION, describeOffRuler, nearestMark, type RulerMark, type RulerPrecision, type RulerSystem } from './ruler';
 
 export type CheckSeverity = 'warning' | 'error';
@@ -17,7 +19,11 @@ export type CheckCode =
   | 'mat-too-large'
   | 'mat-uneven'
   | 'mat-margin-small'
-  | 'larger-than-stock';
+  | 'larger-than-stock'
+  | 'shape-size'
+  | 'grain-against-stock'
+  /** A stored size that cannot be used (it does not read, or it is zero, negative or past the bounds). */
+  | 'stored-size';
 
 /** Gaps a mat leaves around it on the piece beneath, centred. */
 export interface MatMargins {
@@ -47,6 +53,8 @@ export interface StockSheet {
   height: Length;
   /** May a piece be turned on the sheet (false for directional prints)? */
   rotate: boolean;
+  /** Which way the sheet's grain runs; not known by default. */
+  grain?: SheetGrain;
 }
 
 export interface CheckContext {
@@ -66,6 +74,9 @@ export interface CheckContext {
 /** 1/8 in: the usual reveal around a mat and the usual nearest spacing of score lines (common practice). */
 export const DEFAULT_MAT_MARGIN: Length = inches([1, 8]);
 export const DEFAULT_MIN_SCORE_GAP: Length = inches([1, 8]);
+
+/** The cut list's words for a piece's two sides (its columns read "Width" and "Length"). */
+const AXIS_WORDS = { width: 'width', height: 'length' } as const;
 
 function sizeText(w: Length, h: Length): string {
   if (w.unit === h.unit) return `${formatLength(w).replace(/ (in|mm|cm)$/, '')} x ${formatLength(h)}`;
@@ -116,20 +127,44 @@ export function checkPiece(piece: Piece, ctx: CheckContext): Check[] {
   const label = pieceLabel(piece);
 
   if (!Number.isInteger(piece.quantity) || piece.quantity < 1) {
-    out.push({ code: 'bad-quantity', severity: 'error', reason: `${label} needs a quantity of at least 1 (it has ${piece.quantity})`, pieceId: piece.id, field: 'quantity' });
+    out.push({
+      code: 'bad-quantity',
+      severity: 'error',
+      reason: `${label} needs a quantity of at least 1 (it has ${piece.quantity})`,
+      pieceId: piece.id,
+      field: 'quantity',
+    });
   }
   const sizeOk = isPositive(piece.width) && isPositive(piece.height);
   if (!sizeOk) {
-    out.push({ code: 'bad-size', severity: 'error', reason: `${label} needs a width and height above zero (it is ${sizeText(piece.width, piece.height)})`, pieceId: piece.id, field: isPositive(piece.width) ? 'height' : 'width' });
+    out.push({
+      code: 'bad-size',
+      severity: 'error',
+      reason: `${label} needs a width and length above zero (it is ${sizeText(piece.width, piece.height)})`,
+      pieceId: piece.id,
+      field: isPositive(piece.width) ? 'height' : 'width',
+    });
   }
-  if (piece.shape === 'circle' && compareLengths(piece.width, piece.height) !== 0) {
-    out.push({ code: 'circle-not-round', severity: 'error', reason: `${label} is a circle, so its width and height must both be the diameter (it is ${sizeText(piece.width, piece.height)})`, pieceId: piece.id, field: 'height' });
+  const round = ROUND_SHAPES.includes(piece.shape);
+  if (round && compareLengths(piece.width, piece.height) !== 0) {
+    out.push({
+      code: 'circle-not-round',
+      severity: 'error',
+      reason: `${label} is a ${SHAPE_LABELS[piece.shape]}, so its width and length must both be the diameter (it is ${sizeText(piece.width, piece.height)})`,
+      pieceId: piece.id,
+      field: 'height',
+    });
   }
 
-  if (piece.shape === 'circle') checkRulerValue(out, piece, 'width', 'Diameter', piece.width, precision, system);
+  if (round) checkRulerValue(out, piece, 'width', 'Diameter', piece.width, precision, system);
   else {
     checkRulerValue(out, piece, 'width', 'Width', piece.width, precision, system);
-    checkRulerValue(out, piece, 'height', 'Height', piece.height, precision, system);
+    // The cut list's column for a piece's second side is "Length"; its checks use the same word.
+    checkRulerValue(out, piece, 'height', 'Length', piece.height, precision, system);
+  }
+  if (sizeOk) {
+    for (const [field, name, l] of shapeLengths(piece)) checkRulerValue(out, piece, field, name, l, precision, system);
+    for (const pr of shapeProblems(piece)) out.push({ code: 'shape-size', severity: pr.severity, reason: pr.reason, pieceId: piece.id, field: pr.field });
   }
 
   // score lines, per axis
@@ -137,10 +172,16 @@ export function checkPiece(piece: Piece, ctx: CheckContext): Check[] {
   piece.scoreLines.forEach((line, index) => {
     const field = `scoreLines.${index}`;
     const dim = line.axis === 'width' ? piece.width : piece.height;
-    const dimName = line.axis;
+    const dimName = AXIS_WORDS[line.axis];
     checkRulerValue(out, piece, field, 'Score line at', line.at, precision, system);
     if (compareLengths(line.at, inches(0)) <= 0 || compareLengths(line.at, dim) >= 0) {
-      out.push({ code: 'score-outside', severity: 'error', reason: `Score line at ${formatLength(line.at)} is outside the ${formatLength(dim)} ${dimName}`, pieceId: piece.id, field });
+      out.push({
+        code: 'score-outside',
+        severity: 'error',
+        reason: `Score line at ${formatLength(line.at)} is outside the ${formatLength(dim)} ${dimName}`,
+        pieceId: piece.id,
+        field,
+      });
       return;
     }
     byAxis[line.axis].push({ at: line.at, tab: line.tab === true, index });
@@ -177,17 +218,32 @@ export function checkPiece(piece: Piece, ctx: CheckContext): Check[] {
 
   if (ctx.stock && sizeOk) {
     const { width: sw, height: sh, rotate } = ctx.stock;
-    const fits = compareLengths(piece.width, sw) <= 0 && compareLengths(piece.height, sh) <= 0;
-    const fitsTurned = rotate && compareLengths(piece.width, sh) <= 0 && compareLengths(piece.height, sw) <= 0;
+    // A pillow box is cut from its flat blank, larger than the box.
+    const ext = pieceExtent(piece);
+    const fits = compareLengths(ext.width, sw) <= 0 && compareLengths(ext.height, sh) <= 0;
+    const fitsTurned = rotate && compareLengths(ext.width, sh) <= 0 && compareLengths(ext.height, sw) <= 0;
+    const blank = piece.shape === 'pillow-box' ? `; its blank ${sizeText(ext.width, ext.height)}` : '';
     if (!fits && !fitsTurned) {
       const turn = rotate ? ', even turned' : ' (turning is off for this material)';
       out.push({
         code: 'larger-than-stock',
         severity: 'error',
-        reason: `${label} (${sizeText(piece.width, piece.height)}) is larger than the ${sizeText(sw, sh)} stock sheet${turn}`,
+        reason: `${label} (${sizeText(piece.width, piece.height)}${blank}) is larger than the ${sizeText(sw, sh)} stock sheet${turn}`,
         pieceId: piece.id,
         field: 'width',
       });
+    } else {
+      const ways = allowedOrientations({ ...ext, grain: piece.grain, name: piece.name }, ctx.stock);
+      const grainFits = (ways.upright && fits) || (ways.turned && fitsTurned);
+      if (!grainFits) {
+        out.push({
+          code: 'grain-against-stock',
+          severity: 'error',
+          reason: ways.reason ?? `${label} fits the ${sizeText(sw, sh)} stock sheet only turned across its grain; it needs its grain along its ${piece.grain}`,
+          pieceId: piece.id,
+          field: 'grain',
+        });
+      }
     }
   }
   return out;
@@ -200,7 +256,13 @@ function checkMat(out: Check[], piece: Piece, ctx: CheckContext, label: string):
   }
   const base = ctx.pieces.find((p) => p.id === piece.matOn);
   if (!base) {
-    out.push({ code: 'mat-base-missing', severity: 'error', reason: `${label} sits on a piece that is not in the cut list`, pieceId: piece.id, field: 'matOn' });
+    out.push({
+      code: 'mat-base-missing',
+      severity: 'error',
+      reason: `${label} sits on a piece that is not in the cut list`,
+      pieceId: piece.id,
+      field: 'matOn',
+    });
     return;
   }
   const baseLabel = pieceLabel(base);
@@ -216,13 +278,21 @@ function checkMat(out: Check[], piece: Piece, ctx: CheckContext, label: string):
     return;
   }
   const want = ctx.matMargin ?? DEFAULT_MAT_MARGIN;
-  const sides = compareLengths(margins.left, margins.top) === 0
-    ? `${formatLength(margins.left)} each side`
-    : `${formatLength(margins.left)} at left and right, ${formatLength(margins.top)} at top and bottom`;
+  const sides =
+    compareLengths(margins.left, margins.top) === 0
+      ? `${formatLength(margins.left)} each side`
+      : `${formatLength(margins.left)} at left and right, ${formatLength(margins.top)} at top and bottom`;
   // a circle mat on a circle is even by construction; a rectangle on a circle is judged at its corners
   const rectOnCircle = base.shape === 'circle' && piece.shape === 'rect';
   if (!rectOnCircle && compareLengths(margins.left, margins.top) !== 0) {
-    out.push({ code: 'mat-uneven', severity: 'warning', reason: `${label} on ${baseLabel} leaves uneven margins: ${sides}`, pieceId: piece.id, field: 'matOn', margins });
+    out.push({
+      code: 'mat-uneven',
+      severity: 'warning',
+      reason: `${label} on ${baseLabel} leaves uneven margins: ${sides}`,
+      pieceId: piece.id,
+      field: 'matOn',
+      margins,
+    });
   }
   let small: boolean;
   if (rectOnCircle) {
@@ -247,7 +317,10 @@ function checkMat(out: Check[], piece: Piece, ctx: CheckContext, label: string):
 }
 
 /** Every finding for a whole cut list, piece by piece in order. */
-export function checkCutList(pieces: readonly Piece[], ctx: Omit<CheckContext, 'pieces'> & { pieces?: readonly Piece[]; stockFor?: (material: string) => StockSheet | undefined }): Check[] {
+export function checkCutList(
+  pieces: readonly Piece[],
+  ctx: Omit<CheckContext, 'pieces'> & { pieces?: readonly Piece[]; stockFor?: (material: string) => StockSheet | undefined },
+): Check[] {
   const full: CheckContext = { ...ctx, pieces: ctx.pieces ?? pieces };
   const out: Check[] = [];
   for (const p of pieces) {

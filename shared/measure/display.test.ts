@@ -14,6 +14,15 @@ describe('displayLength', () => {
     expect(displayLength(millimetres(13), 32)).toEqual({ primary: '13 mm', secondary: '≈ 1/2 in' });
     expect(displayLength(millimetres(10), 32)).toEqual({ primary: '10 mm', secondary: '≈ 13/32 in' });
   });
+
+  it('a length below half a ruler mark (a caliper) shows in decimals, never as 0', () => {
+    // 0.3 mm / 25.4 mm per in = 0.01181 in (NIST SP 811: 1 in = 25.4 mm exactly).
+    expect(displayLength(millimetres('0.3'))).toEqual({ primary: '0.3 mm', secondary: '≈ 0.012 in' });
+    // 0.25 mm = 0.00984 in; 1/1000 in = 0.0254 mm.
+    expect(displayLength(millimetres('0.25'), 32).secondary).toBe('≈ 0.0098 in');
+    expect(displayLength(inches([1, 1000])).secondary).toBe('0.025 mm');
+    expect(displayLength(millimetres(0)).secondary).toBe('0 in');
+  });
 });
 
 describe('lengthSummary', () => {

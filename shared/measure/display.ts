@@ -1,4 +1,4 @@
-import { formatLength, formatMm, inchesNumber, mmNumber, serializeLength, type Length } from './length';
+import { formatLength, formatMm, inchesNumber, mmNumber, roundForDisplay, serializeLength, toInches, toMm, type Length } from './length';
 import { DEFAULT_PRECISION, nearestMark, type RulerPrecision } from './ruler';
 
 /** How a length shows in the interface: the crafter's own form, and the other system in a lighter tone. */
@@ -9,10 +9,29 @@ export interface LengthDisplay {
   secondary: string;
 }
 
+/**
+ * A length too small for its usual rounding (a card's caliper, 0.3 mm) in decimals with two
+ * significant digits ("0.012 in", "0.025 mm"), so a non-zero length never reads as zero.
+ */
+function smallDecimal(value: Parameters<typeof roundForDisplay>[0], unit: string): string {
+  for (let decimals = 2; decimals < 8; decimals++) {
+    const text = roundForDisplay(value, decimals);
+    if (/[1-9]\d/.test(text.replace('.', ''))) return `${text} ${unit}`;
+  }
+  return `${roundForDisplay(value, 8)} ${unit}`;
+}
+
+const isZero = (l: Length) => l.value.n === 0n;
+
 /** The two texts to show for a length (see LengthDisplay). */
 export function displayLength(l: Length, precision: RulerPrecision = DEFAULT_PRECISION): LengthDisplay {
-  if (l.unit === 'in') return { primary: formatLength(l), secondary: formatMm(l) };
+  if (l.unit === 'in') {
+    const mm = formatMm(l);
+    return { primary: formatLength(l), secondary: mm === '0 mm' && !isZero(l) ? smallDecimal(toMm(l), 'mm') : mm };
+  }
   const mark = nearestMark(l, precision);
+  // Below half a ruler mark the nearest mark is 0, which says nothing about a real thickness.
+  if (isZero(mark.mark) && !isZero(l)) return { primary: formatLength(l), secondary: `≈ ${smallDecimal(toInches(l), 'in')}` };
   return { primary: formatLength(l), secondary: `${mark.onRuler ? '' : '≈ '}${formatLength(mark.mark)}` };
 }
 

@@ -1,9 +1,16 @@
 import Fraction from 'fraction.js';
 import type { Length, LengthUnit } from './length';
-import type { Token } from './tokenize';
+import { phraseAt, type Token } from './tokenize';
 import {
   APPROX_PHRASES,
   APPROX_SUFFIXES,
+  EVERY_WORDS,
+  INTERVAL_WORDS,
+  RANGE_JOINS,
+  RANGE_LEADS,
+  RANGE_STARTS,
+  START_AT_WORDS,
+  TOLERANCE_HEDGES,
   CIRCLE_GAP_WORDS,
   CIRCLE_WORDS,
   COMPOUND_DENOMINATORS,
@@ -23,7 +30,7 @@ import {
 } from './words';
 
 /** The shape a mention takes. */
-export type MentionKind = 'size' | 'score' | 'length' | 'diameter';
+export type MentionKind = 'size' | 'score' | 'length' | 'diameter' | 'range';
 
 /** Options shared by the parser and the mention finder. */
 export interface ParseOptions {
@@ -59,6 +66,8 @@ export interface ParsedLength {
   first: number;
   /** Index after the last token. */
   end: number;
+  /** The unit was joined to the number by a hyphen ("two-inch") or said in the singular before a noun: an adjective. */
+  adjectival?: boolean;
 }
 
 /** A mention in token positions, before it is tied to text. */
@@ -69,19 +78,73 @@ export interface RawMention {
   first: number;
   end: number;
   corrected?: boolean;
+  /** Repeated score lines: the step between them ("every quarter inch"). */
+  every?: Length;
+  /** How many pieces were said before the size ("three 4 by 6 mats"). */
+  count?: number;
 }
 
 const ONE = new Fraction(1);
+// Millimetres per unit, to order a range's ends (1 in = 25.4 mm, NIST SP 811).
+const UNIT_MM: Record<LengthUnit, Fraction> = { in: new Fraction(127, 5), mm: new Fraction(1), cm: new Fraction(10) };
+
+const byFirstWord = (phrases: readonly (readonly string[])[]) => {
+  const map = new Map<string, (readonly string[])[]>();
+  for (const p of phrases) {
+    const list = map.get(p[0]!) ?? [];
+    list.push(p);
+    map.set(p[0]!, list);
+  }
+  return map;
+};
+// Phrases come longest first, so the first match is the longest.
+const PREFIX_HEDGES = byFirstWord(APPROX_PHRASES);
+const SUFFIX_HEDGES = byFirstWord(APPROX_SUFFIXES);
+
+/** Words that only glue hedges to the number ("I'd say it's about 4", "roughly, maybe 5"). */
+const HEDGE_GLUE: ReadonlySet<string> = new Set(["it's", 'it', 'is', "that's", 'be', "it'll", 'its']);
+
+/** Unit words that stand for one of themselves before "and a fraction" ("inch and a half"). */
+const BARE_UNITS: ReadonlySet<string> = new Set(['inch', 'centimeter', 'centimetre', 'millimeter', 'millimetre']);
+const SINGULAR_UNITS: ReadonlySet<string> = new Set(['inch', 'centimeter', 'centimetre', 'millimeter', 'millimetre', 'cm', 'mm', 'in']);
 
 const START_WORDS: ReadonlySet<string> = new Set<string>([
   ...SMALL_NUMBERS.keys(),
   ...TENS.keys(),
   ...IMPLICIT_DENOMINATORS,
-  ...APPROX_PHRASES.map((p) => p[0]!),
+  ...PREFIX_HEDGES.keys(),
   ...SCORE_WORDS,
   ...CIRCLE_WORDS,
-  'a', 'an', 'point', 'diameter',
+  ...RANGE_LEADS,
+  ...RANGE_STARTS,
+  ...BARE_UNITS,
+  'a',
+  'an',
+  'point',
+  'diameter',
 ]);
+
+/** A word that names counted things ("strips", "mats", "pieces"): a plural that is not a unit. */
+export function isCountNoun(w: string | undefined): boolean {
+  return (
+    w !== undefined &&
+    w.length > 3 &&
+    w.endsWith('s') &&
+    !w.endsWith('ss') &&
+    !UNIT_WORDS.has(w) &&
+    !DIMENSION_WORDS.has(w) &&
+    !NON_LENGTH_NOUNS.has(w) &&
+    !INTERVAL_WORDS.has(w) &&
+    !SCORE_CONNECTORS.has(w) &&
+    !DENOMINATORS.has(w) &&
+    w !== 'thereabouts' &&
+    w !== 'tops' &&
+    w !== 'always' &&
+    w !== 'is' &&
+    w !== 'was' &&
+    w !== 'this'
+  );
+}
 
 function isPowerOfTwo(d: bigint): boolean {
   return d > 0n && (d & (d - 1n)) === 0n;
@@ -206,7 +269,17 @@ export class Grammar {
     }
     const tk = this.t[i];
     const suffix = this.t[i + 1];
-    if (tk && tk.kind === 'num' && !tk.decimal && tk.value && tk.value.n > 0n && suffix && suffix.adj && suffix.kind === 'word' && ORDINAL_SUFFIXES.has(suffix.text)) {
+    if (
+      tk &&
+      tk.kind === 'num' &&
+      !tk.decimal &&
+      tk.value &&
+      tk.value.n > 0n &&
+      suffix &&
+      suffix.adj &&
+      suffix.kind === 'word' &&
+      ORDINAL_SUFFIXES.has(suffix.text)
+    ) {
       return { den: tk.value.n, end: i + 2 };
     }
     return null;
@@ -250,7 +323,8 @@ export class Grammar {
       const k = whole.end;
       let f: Amount | null = null;
       const next = this.t[k];
-      if (next && next.kind === 'frac') f = this.fraction(k, false);
+      // "twelve 1/2 inch dots": a number in words before a written fraction is a count, not a mixed number
+      if (next && next.kind === 'frac') f = this.t[i]!.kind === 'word' && !next.unicode ? null : this.fraction(k, false);
       else if (this.word(k) === 'and') f = this.fraction(k + 1, false);
       else if (next && next.kind === 'word' && next.text !== 'a' && next.text !== 'an') f = this.fraction(k, false);
       if (f && f.value.compare(ONE) < 0 && f.value.n > 0n) {
@@ -284,39 +358,58 @@ export class Grammar {
     return { unit: u, end };
   }
 
+  /** After the hedges before a length ("about", "a tad over", "I'd say it's roughly"), or i when there are none. */
   private approxPrefix(i: number): number {
-    for (const phrase of APPROX_PHRASES) {
-      let ok = true;
-      for (let k = 0; k < phrase.length; k++) {
-        const tk = this.t[i + k];
-        if (!tk || tk.kind !== 'word' || tk.text !== phrase[k]) {
-          ok = false;
-          break;
-        }
+    let j = i;
+    let hedged = false;
+    for (let guard = 0; guard < 6; guard++) {
+      const len = phraseAt(this.t, j, PREFIX_HEDGES);
+      if (len > 0) {
+        hedged = true;
+        j += len;
+        // "approx.", "ca.": the abbreviation point
+        const dot = this.t[j];
+        if (dot && dot.kind === 'stop' && dot.text === '.' && dot.adj) j++;
+        if (this.t[j]?.kind === 'comma') j++;
+        continue;
       }
-      if (ok) return i + phrase.length;
+      const w = this.word(j);
+      if (hedged && w !== undefined && HEDGE_GLUE.has(w)) {
+        j++;
+        continue;
+      }
+      break;
     }
-    return i;
+    return hedged ? j : i;
   }
 
+  /** After the hedges that follow a length ("or so", "-ish", "give or take an eighth"), or i when there are none. */
   private approxSuffix(i: number): number {
-    for (const phrase of APPROX_SUFFIXES) {
-      let ok = true;
-      for (let k = 0; k < phrase.length; k++) {
-        if (this.word(i + k) !== phrase[k]) {
-          ok = false;
-          break;
-        }
-      }
-      if (ok) return i + phrase.length;
+    let k = i;
+    if (this.t[k]?.kind === 'comma' && phraseAt(this.t, k + 1, SUFFIX_HEDGES) > 0) k++;
+    const len = phraseAt(this.t, k, SUFFIX_HEDGES);
+    if (len === 0) return i;
+    const phrase = this.t
+      .slice(k, k + len)
+      .map((t) => t.text)
+      .join(' ');
+    let end = k + len;
+    if (TOLERANCE_HEDGES.has(phrase)) {
+      // "plus or minus a sixteenth": the tolerance belongs to the hedge
+      const tol = this.lengthAt(end, undefined, true);
+      if (tol) end = tol.end;
+      return end;
     }
-    return i;
+    // "4 inches, probably 5": a hedge that starts the next length is not this one's
+    const next = this.t[end];
+    if (next && (next.kind === 'num' || next.kind === 'frac' || (next.kind === 'word' && (SMALL_NUMBERS.has(next.text) || TENS.has(next.text))))) return i;
+    return end;
   }
 
   // ---------- lengths ----------
 
   /** A single length starting at token i, or null. */
-  lengthAt(i: number, inherit?: LengthUnit): ParsedLength | null {
+  lengthAt(i: number, inherit?: LengthUnit, noSuffix = false): ParsedLength | null {
     if (i >= this.t.length) return null;
     const j = this.approxPrefix(i);
     let approx = j > i;
@@ -328,12 +421,36 @@ export class Grammar {
         u = this.unit(j + 1);
         if (u && this.word(j + 1) !== 'in') a = { value: ONE, end: j + 1, form: 'int', article: true };
         else u = null;
+      } else if (w !== undefined && BARE_UNITS.has(w) && this.word(j + 1) === 'and') {
+        // "inch and five eighths", "mark it inch and an eighth": one unit and a fraction
+        const f = this.fraction(j + 2, false);
+        u = this.unit(j);
+        if (u && f && f.value.compare(ONE) < 0 && f.value.n > 0n) {
+          const unitWord = w;
+          const value = ONE.add(f.value);
+          const s = noSuffix ? f.end : this.approxSuffix(f.end);
+          return {
+            length: { value, unit: u.unit },
+            explicitUnit: true,
+            strong: true,
+            approx: approx || s > f.end,
+            first: i,
+            end: s,
+            adjectival: unitWord === 'inch' && isCountNoun(this.word(s)),
+          };
+        }
+        u = null;
       }
       if (!a) return null;
     }
     let k = a.end;
     let value = a.value;
     let form = a.form;
+    // "six-ish inches", "4ish cm"
+    if (this.word(k) === 'ish') {
+      approx = true;
+      k++;
+    }
     if (!u) {
       if (a.implicit) {
         // "quarter inch", "half an inch", "half of an inch"
@@ -375,14 +492,32 @@ export class Grammar {
       }
     }
     const den = a.den ?? 1n;
+    // "cut it seven-ish", "make it about six.": a hedged bare number that ends the phrase is a length
+    const after = this.t[k];
+    const hedgedAlone =
+      approx &&
+      (after === undefined ||
+        after.kind === 'comma' ||
+        after.kind === 'stop' ||
+        after.kind === 'corr' ||
+        (after.kind === 'word' && (DIMENSION_WORDS.has(after.text) || after.text === 'off' || this.approxSuffix(k) > k)));
     const strong =
+      hedgedAlone ||
       u !== null ||
       form === 'mixed' ||
       (form === 'fraction' && (a.unicode === true || (a.digits === true ? isPowerOfTwo(den) && den >= 2n && den <= 64n : den >= 8n)));
-    const s = this.approxSuffix(k);
-    if (s > k) {
-      approx = true;
-      k = s;
+    // a unit joined by a hyphen ("two-inch strips") or singular before a plural noun ("2 inch strips") is an adjective
+    const unitTok = u ? this.t[u.end - 1] : undefined;
+    const adjectival =
+      u !== null &&
+      unitTok !== undefined &&
+      (unitTok.hyph === true || (unitTok.kind === 'word' && SINGULAR_UNITS.has(unitTok.text) && isCountNoun(this.word(k))));
+    if (!noSuffix) {
+      const s = this.approxSuffix(k);
+      if (s > k) {
+        approx = true;
+        k = s;
+      }
     }
     return {
       length: { value, unit: u?.unit ?? inherit ?? this.defaultUnit },
@@ -391,6 +526,7 @@ export class Grammar {
       approx,
       first: i,
       end: k,
+      adjectival,
     };
   }
 
@@ -414,6 +550,8 @@ export class Grammar {
       const next = this.lengthAt(cur.end, inherit);
       if (!next) return cur;
       const same = next.length.value.equals(cur.length.value) && (next.length.unit === cur.length.unit || !cur.explicitUnit || !next.explicitUnit);
+      // "two two-inch strips": a count before an adjective, not a stutter
+      if (same && !cur.explicitUnit && next.adjectival) return cur;
       if (!(same || (!cur.strong && next.strong))) return cur;
       const keep = next.explicitUnit || !cur.explicitUnit ? next : cur;
       cur = {
@@ -497,11 +635,23 @@ export class Grammar {
     const limit = Math.min(this.t.length, i + 10);
     while (j < limit) {
       const tk = this.t[j]!;
-      if (tk.kind === 'stop' || tk.kind === 'num' || tk.kind === 'frac') return null;
-      if (tk.kind === 'word' && tk.text === 'at') break;
+      if (tk.kind === 'stop') return null;
+      if (tk.kind === 'word' && (tk.text === 'at' || EVERY_WORDS.has(tk.text))) break;
+      // "score lines a quarter inch apart"
+      const step = this.canStart(j) ? this.stepAt(j) : null;
+      if (step) return this.repeat(i, step);
+      if (tk.kind === 'num' || tk.kind === 'frac') return null;
       j++;
     }
-    if (this.word(j) !== 'at') return null;
+    const atWord = this.word(j);
+    if (atWord !== undefined && EVERY_WORDS.has(atWord)) {
+      const step = this.everyAt(j);
+      return step ? this.repeat(i, step) : null;
+    }
+    if (atWord !== 'at') return null;
+    // "score at one inch intervals", "score at every half inch"
+    const step = this.stepAt(j + 1) ?? (EVERY_WORDS.has(this.word(j + 1) ?? '') ? this.everyAt(j + 1) : null);
+    if (step) return this.repeat(i, step);
     const items: ParsedLength[] = [];
     let k = j + 1;
     let sawCorr = false;
@@ -511,7 +661,8 @@ export class Grammar {
       if (!l) break;
       // "score at 4 and 3 pieces": a count, not a score line
       const after = this.t[l.end];
-      if (items.length > 0 && !l.strong && after && after.kind === 'word' && after.text.length > 3 && after.text.endsWith('s') && !after.text.endsWith('ss')) break;
+      if (items.length > 0 && !l.strong && after && after.kind === 'word' && after.text.length > 3 && after.text.endsWith('s') && !after.text.endsWith('ss'))
+        break;
       const last = items[items.length - 1];
       if (last && sawCorr) items[items.length - 1] = { ...l, first: last.first };
       else if (last && !sawConnector && l.length.value.equals(last.length.value)) items[items.length - 1] = { ...l, first: last.first };
@@ -544,6 +695,91 @@ export class Grammar {
     if (items.length === 0) return null;
     const lastItem = items[items.length - 1]!;
     return { kind: 'score', values: this.shareUnits(items), approx: items.some((x) => x.approx), first: i, end: lastItem.end };
+  }
+
+  /** "one inch intervals", "a quarter inch apart", "1/4 in increments": a length said as a step. */
+  private stepAt(k: number): ParsedLength | null {
+    const l = this.lengthAt(k);
+    if (!l) return null;
+    const w = this.word(l.end);
+    if (w !== undefined && INTERVAL_WORDS.has(w)) return { ...l, end: l.end + 1 };
+    // "at intervals of half an inch"
+    return null;
+  }
+
+  /** "every quarter inch", "every other inch", "each 1/2 in", "every inch": the step after "every". */
+  private everyAt(k: number): ParsedLength | null {
+    let j = k + 1;
+    let times = 1;
+    if (this.word(j) === 'other') {
+      times = 2;
+      j++;
+    }
+    let l = this.lengthAt(j);
+    if (!l) {
+      // "every inch", "every centimetre": one unit
+      const u = this.unit(j);
+      if (!u || this.word(j) === 'in') return null;
+      l = { length: { value: ONE, unit: u.unit }, explicitUnit: true, strong: true, approx: false, first: j, end: u.end };
+    }
+    if (l.length.value.n === 0n) return null;
+    return times === 1 ? l : { ...l, length: { value: l.length.value.mul(times), unit: l.length.unit } };
+  }
+
+  /** Repeated score lines from a step, with where they start when said ("starting at 1 inch"). */
+  private repeat(i: number, step: ParsedLength): RawMention {
+    let end = step.end;
+    let first = step.length;
+    // "down the flap", "along the long side": a few words before "starting at"
+    for (let k = end; k < Math.min(this.t.length, end + 6); k++) {
+      const w = this.word(k);
+      if (w === undefined) break;
+      if (START_AT_WORDS.has(w)) {
+        let m = k + 1;
+        if (this.word(m) === 'at' || this.word(m) === 'from') m++;
+        const start = this.lengthAt(m, step.explicitUnit ? step.length.unit : undefined);
+        if (start) {
+          first = start.length;
+          end = start.end;
+        }
+        break;
+      }
+    }
+    return { kind: 'score', values: [first], every: step.length, approx: step.approx, first: i, end };
+  }
+
+  /**
+   * A range: "somewhere from a quarter to three eighths", "between two and two and a half",
+   * "5 to 6 mm", "4-5 inches", "three or four inches". Always approximate: the speaker did not
+   * settle on one length.
+   */
+  range(i: number): RawMention | null {
+    let j = i;
+    const w0 = this.word(j);
+    if (w0 !== undefined && RANGE_LEADS.has(w0) && RANGE_STARTS.has(this.word(j + 1) ?? '')) j++;
+    const lead = this.word(j);
+    const between = lead === 'between';
+    const prefixed = lead !== undefined && RANGE_STARTS.has(lead);
+    if (prefixed) j++;
+    else if (j !== i) return null;
+    const l1 = this.lengthAt(j);
+    if (!l1) return null;
+    const k = this.dimensionEnd(l1.end);
+    const join = this.word(k);
+    if (join === undefined) return null;
+    if (between ? join !== 'and' : !RANGE_JOINS.has(join) && !(prefixed && join === 'and')) return null;
+    const l2 = this.lengthAt(k + 1, l1.explicitUnit ? l1.length.unit : undefined);
+    if (!l2) return null;
+    // "between 2 and 3 pieces", "cut 2 or 3 strips": counts, not lengths
+    if (!l2.explicitUnit && isCountNoun(this.word(l2.end))) return null;
+    if (!prefixed && !l1.strong && !l2.strong) return null;
+    if (join === 'or' && !l2.strong) return null;
+    const [a, b] = this.shareUnits([l1, l2]) as [Length, Length];
+    const cmp = a.value.mul(UNIT_MM[a.unit]).compare(b.value.mul(UNIT_MM[b.unit]));
+    // "trim it from 12 to 11 inches" is a change, not a range; "between" may name the ends either way
+    if (cmp === 0 || (cmp > 0 && !between)) return null;
+    const values = cmp > 0 ? [b, a] : [a, b];
+    return { kind: 'range', values, approx: true, first: i, end: this.dimensionEnd(l2.end) };
   }
 
   private asideToAt(k: number): number {

@@ -16,8 +16,6 @@ export interface Length {
 /** Anything `Fraction` accepts: 3, "3/8", [3, 8], a bigint, another Fraction. */
 export type RationalInput = Fraction | number | bigint | string | [number | bigint, number | bigint];
 
-export const LENGTH_UNITS: readonly LengthUnit[] = ['in', 'mm', 'cm'];
-
 // 1 in = 25.4 mm exactly (NIST SP 811, Appendix B), so 1 mm = 5/127 in.
 const MM_PER_UNIT: Record<LengthUnit, Fraction> = {
   in: new Fraction(127, 5),
@@ -50,13 +48,6 @@ export function millimetres(value: RationalInput): Length {
 /** Shorthand for a length in centimetres. */
 export function centimetres(value: RationalInput): Length {
   return length(value, 'cm');
-}
-
-/** True for a well-formed length object (used to guard data from the outside). */
-export function isLength(x: unknown): x is Length {
-  if (typeof x !== 'object' || x === null) return false;
-  const l = x as Partial<Length>;
-  return l.value instanceof Fraction && typeof l.unit === 'string' && (LENGTH_UNITS as string[]).includes(l.unit);
 }
 
 /** The exact amount in inches. */
@@ -119,16 +110,6 @@ export function subtractLengths(a: Length, b: Length): Length {
 /** The length times an exact factor, in the same unit. */
 export function scaleLength(l: Length, factor: RationalInput): Length {
   return { value: l.value.mul(toFraction(factor)), unit: l.unit };
-}
-
-/** The smaller of two lengths. */
-export function minLength(a: Length, b: Length): Length {
-  return compareLengths(a, b) <= 0 ? a : b;
-}
-
-/** The larger of two lengths. */
-export function maxLength(a: Length, b: Length): Length {
-  return compareLengths(a, b) >= 0 ? a : b;
 }
 
 /** The sum of several lengths (zero inches for none). */
@@ -213,11 +194,6 @@ export function roundForDisplay(f: Fraction, decimals: number): string {
 /** Millimetres for the lighter text beside a length: "268.3 mm". */
 export function formatMm(l: Length, decimals = 1): string {
   return `${roundForDisplay(toMm(l), decimals)} mm`;
-}
-
-/** Decimal inches for display: "10.5625 in" (rounded to `decimals`). */
-export function formatInchesDecimal(l: Length, decimals = 4): string {
-  return `${roundForDisplay(toInches(l), decimals)} in`;
 }
 
 // ---------- storage ----------

@@ -113,7 +113,19 @@ describe('readLength: units and flags', () => {
   });
 
   it('marks approximate lengths', () => {
-    for (const p of ['about', 'around', 'roughly', 'approximately', 'probably', 'just over', 'just under', 'a little more than', 'a little bit more than', 'a little longer than', 'a little bit longer than']) {
+    for (const p of [
+      'about',
+      'around',
+      'roughly',
+      'approximately',
+      'probably',
+      'just over',
+      'just under',
+      'a little more than',
+      'a little bit more than',
+      'a little longer than',
+      'a little bit longer than',
+    ]) {
       const r = readLength(`${p} 4 inches`);
       expect(r, p).not.toBeNull();
       expect(r!.approx, p).toBe(true);
@@ -125,7 +137,23 @@ describe('readLength: units and flags', () => {
 });
 
 describe('readLength: not one length', () => {
-  it.each(['', '   ', 'abc', 'four by six', 'ten minutes', '$4.99', '3:15', '5 gems', 'two pieces and a half', 'half', 'in', '4 ft', "4'", '50%', 'fold in half'])('%j -> null', (input) => {
+  it.each([
+    '',
+    '   ',
+    'abc',
+    'four by six',
+    'ten minutes',
+    '$4.99',
+    '3:15',
+    '5 gems',
+    'two pieces and a half',
+    'half',
+    'in',
+    '4 ft',
+    "4'",
+    '50%',
+    'fold in half',
+  ])('%j -> null', (input) => {
     expect(parseLength(input)).toBeNull();
   });
 });

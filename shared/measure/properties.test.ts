@@ -39,11 +39,79 @@ describe('display form round trip (property)', () => {
 
 // Words the grammar cares about, to make inputs that reach deep into it.
 const VOCAB = [
-  'a', 'an', 'and', 'by', 'x', '×', 'at', 'score', 'it', 'circle', 'across', 'diameter', 'in', 'inch', 'inches', 'mm', 'cm',
-  'half', 'quarter', 'quarters', 'third', 'eighths', 'sixteenths', 'thirty', 'second', 'seconds', 'sixty', 'fourths', 'point',
-  'one', 'two', 'ten', 'nine', 'twenty', 'hundred', 'of', 'about', 'just', 'over', 'a little bit more than', 'sorry', 'no',
-  'um', 'like', 'you know', 'the', 'wide', 'long', 'minutes', '$4.99', '3:15', '10', '9/16', '0/0', '1/0', '3½', '⅝', '"', "'",
-  '.', ',', '-', '16ths', '1.75', '.5', '99999999999999999999', '%', 'or so', 'ish', 'i mean', '\n', '', '🙂',
+  'a',
+  'an',
+  'and',
+  'by',
+  'x',
+  '×',
+  'at',
+  'score',
+  'it',
+  'circle',
+  'across',
+  'diameter',
+  'in',
+  'inch',
+  'inches',
+  'mm',
+  'cm',
+  'half',
+  'quarter',
+  'quarters',
+  'third',
+  'eighths',
+  'sixteenths',
+  'thirty',
+  'second',
+  'seconds',
+  'sixty',
+  'fourths',
+  'point',
+  'one',
+  'two',
+  'ten',
+  'nine',
+  'twenty',
+  'hundred',
+  'of',
+  'about',
+  'just',
+  'over',
+  'a little bit more than',
+  'sorry',
+  'no',
+  'um',
+  'like',
+  'you know',
+  'the',
+  'wide',
+  'long',
+  'minutes',
+  '$4.99',
+  '3:15',
+  '10',
+  '9/16',
+  '0/0',
+  '1/0',
+  '3½',
+  '⅝',
+  '"',
+  "'",
+  '.',
+  ',',
+  '-',
+  '16ths',
+  '1.75',
+  '.5',
+  '99999999999999999999',
+  '%',
+  'or so',
+  'ish',
+  'i mean',
+  '\n',
+  '',
+  '🙂',
 ];
 const phraseArb = fc.array(fc.constantFrom(...VOCAB), { maxLength: 40 }).map((ws) => ws.join(' '));
 const gluedArb = fc.array(fc.constantFrom(...VOCAB), { maxLength: 20 }).map((ws) => ws.join(''));
@@ -57,18 +125,30 @@ describe('never throws (property)', () => {
       for (const v of m.values) expect(v.value.s >= 0n || v.value.n === 0n).toBe(true);
     }
     parseLength(text);
-    extractMentionsFromCues([{ startMs: 0, endMs: 1, text }, { startMs: 1, endMs: 2, text }]);
+    extractMentionsFromCues([
+      { startMs: 0, endMs: 1, text },
+      { startMs: 1, endMs: 2, text },
+    ]);
   };
 
   it('on arbitrary unicode strings', () => {
-    fc.assert(fc.property(fc.string({ unit: 'binary', maxLength: 200 }), (s) => noThrow(s)), { numRuns: 3000 });
+    fc.assert(
+      fc.property(fc.string({ unit: 'binary', maxLength: 200 }), (s) => noThrow(s)),
+      { numRuns: 3000 },
+    );
   });
 
   it('on phrases made of the grammar’s own words', () => {
-    fc.assert(fc.property(phraseArb, (s) => noThrow(s)), { numRuns: 3000 });
+    fc.assert(
+      fc.property(phraseArb, (s) => noThrow(s)),
+      { numRuns: 3000 },
+    );
   });
 
   it('on the grammar’s words glued together', () => {
-    fc.assert(fc.property(gluedArb, (s) => noThrow(s)), { numRuns: 2000 });
+    fc.assert(
+      fc.property(gluedArb, (s) => noThrow(s)),
+      { numRuns: 2000 },
+    );
   });
 });

@@ -25,7 +25,9 @@ describe('ruler marks (M3, M4)', () => {
     const m = nearestMark(millimetres(13), 16);
     expect(serializeLength(m.mark)).toBe('1/2 in');
     expect(m.errorInches.equals(new Fraction(65, 127).sub(new Fraction(1, 2)))).toBe(true);
-    expect(describeOffRuler('Score line at', millimetres(13), 16)).toBe('Score line at 13 mm (0.5118 in) is between the 1/16 in marks: nearest 1/2 in, 0.0118 in (0.3 mm) over');
+    expect(describeOffRuler('Score line at', millimetres(13), 16)).toBe(
+      'Score line at 13 mm (0.5118 in) is between the 1/16 in marks: nearest 1/2 in, 0.0118 in (0.3 mm) over',
+    );
   });
 
   it('precision decides what is on the ruler', () => {

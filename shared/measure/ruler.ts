@@ -73,6 +73,18 @@ export function roundUpToMark(l: Length, precision: RulerPrecision = DEFAULT_PRE
   return { value: new Fraction(ceilFraction(toInches(l).mul(p)), p), unit: 'in' };
 }
 
+function floorFraction(f: Fraction): bigint {
+  const num = f.s < 0n ? -f.n : f.n;
+  const q = num / f.d;
+  return num % f.d !== 0n && num < 0n ? q - 1n : q;
+}
+
+/** The largest inch mark at or below the length (a flap cut short only widens its gap; a long one buckles). */
+export function roundDownToMark(l: Length, precision: RulerPrecision = DEFAULT_PRECISION): Length {
+  const p = BigInt(precision);
+  return { value: new Fraction(floorFraction(toInches(l).mul(p)), p), unit: 'in' };
+}
+
 /** The nearest inch mark. */
 export function roundToMark(l: Length, precision: RulerPrecision = DEFAULT_PRECISION): Length {
   return nearestMark(l, precision, 'inch').mark;

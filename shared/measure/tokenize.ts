@@ -1,5 +1,5 @@
 import Fraction from 'fraction.js';
-import { CORRECTION_PAIRS, CORRECTION_WORDS, FILLER_PAIRS, FILLERS } from './words';
+import { APPROX_PHRASES, CORRECTION_PHRASES, DENOMINATORS, FILLER_PAIRS, FILLERS, ISH_SUFFIX, SMALL_NUMBERS, TENS, UNIT_WORDS } from './words';
 
 /**
  * num: digits ("10", "1.75"); frac: "9/16" or a unicode fraction; word: letters;
@@ -28,19 +28,37 @@ export interface Token {
   src: number;
   /** Touches the previous token of the same source (no space between). */
   adj: boolean;
+  /** Joined to the previous token by a hyphen with no spaces ("two-inch", "4-inch"). */
+  hyph?: boolean;
 }
 
 const UNICODE_FRACTIONS: ReadonlyMap<string, [number, number]> = new Map([
-  ['½', [1, 2]], ['⅓', [1, 3]], ['⅔', [2, 3]], ['¼', [1, 4]], ['¾', [3, 4]],
-  ['⅕', [1, 5]], ['⅖', [2, 5]], ['⅗', [3, 5]], ['⅘', [4, 5]], ['⅙', [1, 6]], ['⅚', [5, 6]],
-  ['⅐', [1, 7]], ['⅛', [1, 8]], ['⅜', [3, 8]], ['⅝', [5, 8]], ['⅞', [7, 8]], ['⅑', [1, 9]], ['⅒', [1, 10]],
+  ['½', [1, 2]],
+  ['⅓', [1, 3]],
+  ['⅔', [2, 3]],
+  ['¼', [1, 4]],
+  ['¾', [3, 4]],
+  ['⅕', [1, 5]],
+  ['⅖', [2, 5]],
+  ['⅗', [3, 5]],
+  ['⅘', [4, 5]],
+  ['⅙', [1, 6]],
+  ['⅚', [5, 6]],
+  ['⅐', [1, 7]],
+  ['⅛', [1, 8]],
+  ['⅜', [3, 8]],
+  ['⅝', [5, 8]],
+  ['⅞', [7, 8]],
+  ['⅑', [1, 9]],
+  ['⅒', [1, 10]],
 ]);
 
 const INCH_MARKS = new Set(['"', '″', '”', '“', '＂']);
 const FOOT_MARKS = new Set(["'", '′', '’']);
 const MONEY = new Set(['$', '£', '€', '¥', '¢']);
 const STOPS = new Set(['.', '!', '?', ';', '…', '。']);
-const SEPARATORS = new Set(['-', '–', '—', '‐', '(', ')', '[', ']', '{', '}', ':', '_', '<', '>', '|', '\\']);
+const DASHES = new Set(['-', '–', '—', '‐', '−']);
+const SEPARATORS = new Set(['(', ')', '[', ']', '{', '}', ':', '_', '<', '>', '|', '\\']);
 
 function isDigit(c: number): boolean {
   return c >= 48 && c <= 57;
@@ -70,7 +88,9 @@ export function tokenize(text: string, src = 0, out: Token[] = []): Token[] {
   const n = text.length;
   let i = 0;
   let lastEnd = -1;
+  let hyphenAt = -1;
   const push = (kind: TokenKind, start: number, end: number, value: Fraction | null = null, extra: Partial<Token> = {}) => {
+    const hyph = start === hyphenAt;
     out.push({
       kind,
       text: kind === 'word' ? text.slice(start, end).toLowerCase().replace(/’/g, "'") : text.slice(start, end),
@@ -81,6 +101,7 @@ export function tokenize(text: string, src = 0, out: Token[] = []): Token[] {
       end,
       src,
       adj: start === lastEnd,
+      ...(hyph ? { hyph } : {}),
       ...extra,
     });
     lastEnd = end;
@@ -213,6 +234,34 @@ export function tokenize(text: string, src = 0, out: Token[] = []): Token[] {
       i++;
       continue;
     }
+    if (ch === '+' && (text.startsWith('+/-', i) || text.startsWith('+-', i))) {
+      // "+/- 1/16": plus or minus
+      const w = text[i + 1] === '/' ? 3 : 2;
+      push('word', i, i + w, null, { text: '±' });
+      i += w;
+      continue;
+    }
+    if (ch === '±') {
+      push('word', i, i + 1, null, { text: '±' });
+      i++;
+      continue;
+    }
+    if (DASHES.has(ch)) {
+      // A dash between two numbers is a range ("4-5 inches", "5 – 6 mm"), except "1-1/2" (a mixed
+      // number as hardware is labelled); a hyphen inside a word joins it ("two-inch").
+      const p = prev();
+      const before = p !== undefined && (p.kind === 'num' || p.kind === 'frac') && (p.end === i || ch !== '-');
+      let k = i + 1;
+      if (ch !== '-') while (k < n && text[k] === ' ') k++;
+      if (before && k < n && isDigit(text.charCodeAt(k)) && (p.end === i || k > i + 1 || ch !== '-') && !/^\d+\s*\/\s*\d/.test(text.slice(k, k + 12))) {
+        push('word', i, i + 1, null, { text: 'to' });
+        i++;
+        continue;
+      }
+      if (p !== undefined && p.end === i && k === i + 1 && i + 1 < n && !isSpace(text.charCodeAt(i + 1))) hyphenAt = i + 1;
+      i++;
+      continue;
+    }
     if (SEPARATORS.has(ch)) {
       i++;
       continue;
@@ -229,10 +278,47 @@ function isWord(t: Token | undefined, w?: string): boolean {
   return t !== undefined && t.kind === 'word' && (w === undefined || t.text === w);
 }
 
+const byFirstWord = (phrases: readonly (readonly string[])[]) => {
+  const map = new Map<string, (readonly string[])[]>();
+  for (const p of [...phrases].sort((a, b) => b.length - a.length)) {
+    const list = map.get(p[0]!) ?? [];
+    list.push(p);
+    map.set(p[0]!, list);
+  }
+  return map;
+};
+const CORRECTIONS_BY_FIRST = byFirstWord(CORRECTION_PHRASES);
+const HEDGES_BY_FIRST = byFirstWord(APPROX_PHRASES);
+
+/** Length of the longest phrase of `map` that starts at tokens[i] (0 when none). */
+export function phraseAt(tokens: readonly Token[], i: number, map: ReadonlyMap<string, readonly (readonly string[])[]>): number {
+  const t = tokens[i];
+  if (!t || t.kind !== 'word') return 0;
+  const candidates = map.get(t.text);
+  if (!candidates) return 0;
+  for (const p of candidates) {
+    let ok = true;
+    for (let k = 1; k < p.length; k++) {
+      const tk = tokens[i + k];
+      if (!tk || tk.kind !== 'word' || tk.text !== p[k]) {
+        ok = false;
+        break;
+      }
+    }
+    if (ok) return p.length;
+  }
+  return 0;
+}
+
+// Stems that take a glued "-ish" ("sixish", "quarterish", "inchish").
+const ISH_STEMS: ReadonlySet<string> = new Set([...SMALL_NUMBERS.keys(), ...TENS.keys(), ...DENOMINATORS.keys(), ...UNIT_WORDS.keys()]);
+
+const isPause = (t: Token | undefined) => t !== undefined && (t.kind === 'comma' || t.kind === 'stop');
+
 /**
- * Drops spoken fillers, folds self-corrections into one `corr` token and
- * collapses stutters ("inch inch", "the the"), so none of them can hide a
- * measurement or split one in two. Offsets still point at the original text.
+ * Drops spoken fillers, folds self-corrections (and the commas, full stops and dashes around
+ * them) into one `corr` token and collapses stutters ("inch inch", "the the"), so none of them
+ * can hide a measurement or split one in two. Offsets still point at the original text.
  */
 export function clean(tokens: readonly Token[]): Token[] {
   const out: Token[] = [];
@@ -241,25 +327,38 @@ export function clean(tokens: readonly Token[]): Token[] {
     const t = tokens[i]!;
     if (t.kind === 'word') {
       const next = tokens[i + 1];
-      if (isWord(next)) {
-        if (FILLER_PAIRS.some(([a, b]) => a === t.text && b === next!.text)) {
-          i++;
-          continue;
-        }
-        if (CORRECTION_PAIRS.some(([a, b]) => a === t.text && b === next!.text)) {
-          pushCorrection(out, t, next!);
-          i++;
-          continue;
-        }
+      if (isWord(next) && FILLER_PAIRS.some(([a, b]) => a === t.text && b === next!.text)) {
+        i++;
+        continue;
+      }
+      // "no more than", "something like": a hedge, kept whole (not a correction, not a filler)
+      const hedge = phraseAt(tokens, i, HEDGES_BY_FIRST);
+      if (hedge > 1) {
+        for (let k = 0; k < hedge; k++) out.push(tokens[i + k]!);
+        i += hedge - 1;
+        continue;
+      }
+      const corr = hedge > 0 ? 0 : phraseAt(tokens, i, CORRECTIONS_BY_FIRST);
+      if (corr > 0) {
+        while (isPause(out[out.length - 1])) out.pop();
+        pushCorrection(out, t, tokens[i + corr - 1]!);
+        i += corr - 1;
+        while (isPause(tokens[i + 1])) i++;
+        continue;
       }
       if (FILLERS.has(t.text)) continue;
-      if (CORRECTION_WORDS.has(t.text)) {
-        pushCorrection(out, t, t);
+      if (t.text.length > ISH_SUFFIX.length + 2 && t.text.endsWith(ISH_SUFFIX) && ISH_STEMS.has(t.text.slice(0, -ISH_SUFFIX.length))) {
+        const cut = t.end - ISH_SUFFIX.length;
+        out.push({ ...t, text: t.text.slice(0, -ISH_SUFFIX.length), end: cut });
+        out.push({ ...t, text: ISH_SUFFIX, start: cut, adj: true });
         continue;
       }
     }
     const last = out[out.length - 1];
-    if (last && last.kind === t.kind && last.text === t.text && t.kind !== 'comma' && t.kind !== 'stop' && t.kind !== 'other') {
+    if (last && last.kind === 'corr' && isPause(t)) continue;
+    // "two two-inch strips": a count before a hyphenated size is not a stutter
+    const countBeforeHyphen = tokens[i + 1]?.hyph === true && (t.kind === 'num' || t.kind === 'word');
+    if (last && last.kind === t.kind && last.text === t.text && t.kind !== 'comma' && t.kind !== 'stop' && t.kind !== 'other' && !countBeforeHyphen) {
       // stutter: keep the first, but let a later unit mark etc. attach to the second's position
       continue;
     }

@@ -13,7 +13,13 @@ describe('partial update schemas fill in nothing they were not given', () => {
     expect(updateSupplySchema.parse({ name: 'Glue' })).toEqual({ name: 'Glue' });
   });
   it('creating still gets the defaults', () => {
-    expect(createPieceSchema.parse({ name: 'Mat', width: '4', height: '5' })).toMatchObject({ material: '', quantity: 1, shape: 'rect', scoreLines: [], notes: '' });
+    expect(createPieceSchema.parse({ name: 'Mat', width: '4', height: '5' })).toMatchObject({
+      material: '',
+      quantity: 1,
+      shape: 'rect',
+      scoreLines: [],
+      notes: '',
+    });
     expect(materialSchema.parse({ name: 'kraft', sheetWidth: '12', sheetHeight: '12' })).toMatchObject({ kind: 'cardstock', rotate: true });
   });
 });

@@ -36,7 +36,13 @@ export async function api<T = unknown>(path: string, opts: Options = {}): Promis
   if (method !== 'GET') headers['X-CSRF-Token'] = await getCsrfToken();
   let res: Response;
   try {
-    res = await fetch(`/api${path}`, { method, headers, credentials: 'same-origin', signal: opts.signal, body: opts.body === undefined ? undefined : JSON.stringify(opts.body) });
+    res = await fetch(`/api${path}`, {
+      method,
+      headers,
+      credentials: 'same-origin',
+      signal: opts.signal,
+      body: opts.body === undefined ? undefined : JSON.stringify(opts.body),
+    });
   } catch (e) {
     if ((e as Error).name === 'AbortError') throw e;
     throw new ApiError(0, 'Cannot reach the server; check your connection and try again');

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { shot, signIn, useBrowser } from './browser';
+import { BASE, shot, signIn, useBrowser } from './browser';
 
 const browser = useBrowser();
 
@@ -46,13 +46,24 @@ describe('accounts in the browser', () => {
     await expect.poll(() => page.getByText(`Invitation sent to ${invitee}.`).isVisible()).toBe(true);
     await shot(page, 'members');
 
+    // The owner's Outbox holds only their own mail: the invitation went to someone else.
     await page.getByRole('link', { name: 'Outbox' }).click();
-    await page.getByRole('link', { name: /invited you to Pike Paper Works/ }).first().click();
+    await expect.poll(() => page.getByText('No mail for you yet').isVisible()).toBe(true);
+    expect(await page.getByRole('link', { name: /invited you to Pike Paper Works/ }).count()).toBe(0);
+    await shot(page, 'outbox');
+    // Every caught message is in the development mailbox, which this machine (loopback) may open.
+    await page.getByRole('link', { name: 'development mailbox' }).click();
+    await page.waitForURL(/\/dev\/mail$/);
+    await page
+      .getByRole('link', { name: new RegExp(`invited you to Pike Paper Works[\\s\\S]*${invitee.replace(/[.]/g, '\\.')}`) })
+      .first()
+      .click();
     const link = page.getByRole('link', { name: /\/invite\// });
     const href = await link.getAttribute('href');
     expect(href).toMatch(/\/invite\//);
-    await shot(page, 'outbox');
+    await shot(page, 'dev-mailbox');
 
+    await page.goto('/');
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/\/sign-in/);
     await page.goto(href!);
@@ -65,6 +76,28 @@ describe('accounts in the browser', () => {
     await expect.poll(() => page.getByRole('link', { name: 'Pop-up snowflake card' }).isVisible()).toBe(true);
     expect(await page.locator('header').getByText('Maker').isVisible()).toBe(true);
     await shot(page, 'invitee-studio');
+    await ctx.close();
+  });
+
+  it('after sign-in follows ?next= on this site and ignores another site’s address (goes home, no error)', async () => {
+    const ctx = await browser.context();
+    const page = await ctx.newPage();
+    for (const next of ['https://evil.example/steal', '//evil.example/steal', '/\\evil.example/steal']) {
+      await page.goto(`/sign-in?next=${encodeURIComponent(next)}`);
+      await page.getByLabel('E-mail').fill('owner@example.com');
+      await page.getByLabel('Password').fill('cardwright-demo');
+      await page.getByRole('button', { name: 'Sign in' }).click();
+      await page.waitForURL(/\/studios\//);
+      expect(new URL(page.url()).host).toBe(new URL(BASE).host);
+      await page.getByRole('button', { name: 'Sign out' }).click();
+      await page.waitForURL(/\/sign-in/);
+    }
+    await page.goto(`/sign-in?next=${encodeURIComponent('/outbox')}`);
+    await page.getByLabel('E-mail').fill('owner@example.com');
+    await page.getByLabel('Password').fill('cardwright-demo');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await page.waitForURL(/\/outbox$/);
+    await shot(page, 'sign-in-next-outbox');
     await ctx.close();
   });
 });

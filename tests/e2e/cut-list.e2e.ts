@@ -48,10 +48,10 @@ describe('the cut list in the browser', () => {
 
     // Unreadable text is refused in words and kept for fixing; Escape puts the old value back.
     await page.getByRole('button', { name: 'Edit width of Side panel' }).click();
-    await page.getByLabel('width of Side panel', { exact: true }).fill('a smidge over ten');
+    await page.getByLabel('width of Side panel', { exact: true }).fill('as long as the lid');
     await page.getByLabel('width of Side panel', { exact: true }).press('Enter');
-    await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Could not read “a smidge over ten”' }).isVisible()).toBe(true);
-    expect(await page.getByLabel('width of Side panel', { exact: true }).inputValue()).toBe('a smidge over ten');
+    await expect.poll(() => page.getByRole('alert').filter({ hasText: 'Could not read “as long as the lid”' }).isVisible()).toBe(true);
+    expect(await page.getByLabel('width of Side panel', { exact: true }).inputValue()).toBe('as long as the lid');
     await page.getByLabel('width of Side panel', { exact: true }).press('Escape');
     await expect.poll(() => side.getByText('10 9/16 in', { exact: true }).isVisible()).toBe(true);
     expect(await page.getByText('All checks pass').count()).toBe(1);
@@ -71,7 +71,12 @@ describe('the cut list in the browser', () => {
     await page.getByLabel('Overlap per strip').fill('1/2');
     const panel = page.getByRole('tabpanel');
     await expect.poll(() => panel.getByText('Cut 2 strips 10 9/16 in').isVisible()).toBe(true);
-    expect(await panel.getByText(/10\.5138 in/).first().isVisible()).toBe(true);
+    expect(
+      await panel
+        .getByText(/10\.5138 in/)
+        .first()
+        .isVisible(),
+    ).toBe(true);
     await panel.getByLabel('Wall height').fill('2 1/2');
     await panel.getByRole('button', { name: 'Add as piece' }).click();
     await expect.poll(() => panel.getByText('Added “Wall strip” to the cut list.').isVisible()).toBe(true);
@@ -82,13 +87,25 @@ describe('the cut list in the browser', () => {
 
     await page.getByRole('tab', { name: 'Sheet plan' }).click();
     await page.getByLabel('Kits').fill('3');
-    const sheet = page.getByRole('img', { name: /sheet 1 of/ }).first();
+    const sheet = page.getByRole('img', { name: /sheets? 1 (of|to)/ }).first();
     await expect.poll(() => sheet.isVisible()).toBe(true);
     expect(await sheet.evaluate((el) => el.tagName.toLowerCase())).toBe('svg');
     // No material given: the plan uses 12 x 12 in sheets (common practice), so the drawing is 12 by 12 inches.
     expect(await sheet.getAttribute('viewBox')).toBe('0 0 12 12');
     expect(await sheet.locator('rect').count()).toBeGreaterThan(3);
     await shot(page, 'cut-list-sheet-plan');
+    // a class: identical sheets are drawn once, with their count
+    await page.getByLabel('Kits').fill('30');
+    await expect
+      .poll(() =>
+        page
+          .getByText(/\d+ sheets like this/)
+          .first()
+          .isVisible(),
+      )
+      .toBe(true);
+    expect(await page.getByRole('img', { name: /all alike/ }).count()).toBeGreaterThan(0);
+    await shot(page, 'cut-list-sheet-plan-class');
     await ctx.close();
   });
 });

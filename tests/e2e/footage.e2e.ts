@@ -19,10 +19,13 @@ First we score the base panel.
 Next we glue the walls to the base.
 `;
 
-// Line 6 has a single-dash arrow: WebVTT cue timings need "-->" (W3C WebVTT, "cue timings").
+// Both timings have a single-dash arrow: WebVTT cue timings need "-->" (W3C WebVTT, "cue timings"), so the parser
+// drops both cues and no timed line is left; the refusal names the first one skipped, at line 5.
 const MALFORMED = `WEBVTT
 
-00:00.000 --> 00:01.500
+NOTE both timings below use a short arrow
+
+00:00.000 -> 00:01.500
 Hello.
 
 00:01.500 -> 00:03.000
@@ -65,7 +68,7 @@ describe('footage in the browser', () => {
 
     // A malformed transcript is refused with the line named; nothing is saved.
     await page.getByLabel('Transcript file').setInputFiles(join(dir, 'broken.vtt'));
-    await expect.poll(() => page.getByText(/Line 6: .*Nothing was saved/).isVisible()).toBe(true);
+    await expect.poll(() => page.getByText(/Line 5: .*Nothing was saved/).isVisible()).toBe(true);
     await shot(page, 'footage-transcript-refused');
 
     await page.getByLabel('Transcript file').setInputFiles(join(dir, 'hexagon-box.vtt'));
@@ -86,27 +89,27 @@ describe('footage in the browser', () => {
     await search.press('Enter');
     await expect.poll(() => page.getByText('2 of 3').isVisible()).toBe(true);
     // Keys typed into the search box are text, not shortcuts: no chapter appears.
-    await search.press('m');
+    await search.press('c');
     await search.fill('');
 
-    // M marks a chapter at the playhead with a default name.
+    // C marks a chapter at the playhead, named from the line said there ("First we score ..." -> "Score ...").
     await page.getByRole('heading', { name: 'Chapters' }).click();
-    await page.keyboard.press('m');
+    await page.keyboard.press('c');
     const chapters = page.getByRole('list', { name: 'Chapters in time order' });
-    await expect.poll(() => chapters.getByRole('button', { name: 'Chapter 1', exact: true }).isVisible()).toBe(true);
+    await expect.poll(() => chapters.getByRole('button', { name: 'Score the base panel', exact: true }).isVisible()).toBe(true);
     expect(await chapters.getByRole('listitem').count()).toBe(1);
     expect(await chapters.getByText('0:01').isVisible()).toBe(true);
     // The first chapter sits at 1.5 s, so the page offers to move it to 0:00.
     await expect.poll(() => page.getByText('The first chapter should start at 0:00').isVisible()).toBe(true);
-    await page.getByRole('button', { name: 'Move “Chapter 1” to 0:00' }).click();
+    await page.getByRole('button', { name: 'Move “Score the base panel” to 0:00' }).click();
     await expect.poll(() => page.getByText('The first chapter should start at 0:00').count()).toBe(0);
     expect(await chapters.getByText('0:00').isVisible()).toBe(true);
 
     // Rename in place: click the title, type, Enter.
-    await chapters.getByRole('button', { name: 'Chapter 1', exact: true }).click();
-    await page.getByLabel('Chapter title').fill('Score the base panel');
+    await chapters.getByRole('button', { name: 'Score the base panel', exact: true }).click();
+    await page.getByLabel('Chapter title').fill('Score the base');
     await page.getByLabel('Chapter title').press('Enter');
-    await expect.poll(() => chapters.getByRole('button', { name: 'Score the base panel', exact: true }).isVisible()).toBe(true);
+    await expect.poll(() => chapters.getByRole('button', { name: 'Score the base', exact: true }).isVisible()).toBe(true);
     await shot(page, 'footage-chapters');
 
     // Pull the exact frame at the playhead (1.5 s: the second colour of the clip).
@@ -122,7 +125,9 @@ describe('footage in the browser', () => {
 
     // What the server kept: the caption, and a frame of the colour on screen at 1.5 s
     // (colourSteps: one colour a second, in STEPS order).
-    const saved = (await (await page.request.get(`/api/recordings/${recordingId}/stills`)).json()) as { stills: { caption: string; url: string; atMs: number }[] };
+    const saved = (await (await page.request.get(`/api/recordings/${recordingId}/stills`)).json()) as {
+      stills: { caption: string; url: string; atMs: number }[];
+    };
     expect(saved.stills).toHaveLength(1);
     expect(saved.stills[0].caption).toBe('The base panel, scored on every side');
     const image = join(dir, 'still.jpg');
@@ -132,13 +137,17 @@ describe('footage in the browser', () => {
     // The chapter list copies as "0:00 Title" lines.
     await ctx.grantPermissions(['clipboard-read', 'clipboard-write']);
     await page.getByRole('button', { name: 'Copy chapter list' }).click();
-    await expect.poll(() => page.evaluate(() => navigator.clipboard.readText())).toBe('0:00 Score the base panel');
+    await expect.poll(() => page.evaluate(() => navigator.clipboard.readText())).toBe('0:00 Score the base');
 
     // After a reload everything is still there.
     await page.reload();
     await page.locator('video').waitFor();
-    await expect.poll(() => page.getByRole('list', { name: 'Chapters in time order' }).getByRole('button', { name: 'Score the base panel', exact: true }).isVisible()).toBe(true);
-    await expect.poll(() => page.getByRole('list', { name: 'Stills in time order' }).getByLabel('Caption').inputValue()).toBe('The base panel, scored on every side');
+    await expect
+      .poll(() => page.getByRole('list', { name: 'Chapters in time order' }).getByRole('button', { name: 'Score the base', exact: true }).isVisible())
+      .toBe(true);
+    await expect
+      .poll(() => page.getByRole('list', { name: 'Stills in time order' }).getByLabel('Caption').inputValue())
+      .toBe('The base panel, scored on every side');
     await shot(page, 'footage-reloaded');
     await ctx.close();
   });

@@ -138,7 +138,13 @@ describe('the Publish section in the browser', () => {
     await shot(page, 'publish-draft-exports');
 
     // The print view opens in a new tab with its Print button.
-    const [print] = await Promise.all([ctx.waitForEvent('page'), page.getByRole('region', { name: 'Handout' }).getByRole('link', { name: /Open print view/ }).click()]);
+    const [print] = await Promise.all([
+      ctx.waitForEvent('page'),
+      page
+        .getByRole('region', { name: 'Handout' })
+        .getByRole('link', { name: /Open print view/ })
+        .click(),
+    ]);
     await print.waitForLoadState();
     expect(print.url()).toContain(`/print/${tutorialId}?paper=a4`);
     expect(await print.getByRole('button', { name: 'Print' }).isVisible()).toBe(true);
@@ -155,10 +161,16 @@ describe('the Publish section in the browser', () => {
       ['Publish', 'published'],
     ] as const) {
       await status.getByRole('button', { name: button, exact: true }).click();
+      // Sending for review and approving ask for a note first (left empty here).
+      if (button !== 'Publish') await status.getByRole('form', { name: button }).getByRole('button', { name: button, exact: true }).click();
       await expect.poll(() => status.getByText(`Done: the tutorial is now ${state}.`).isVisible()).toBe(true);
       await expect.poll(() => header.getByText(state, { exact: true }).first().isVisible()).toBe(true);
       if (state === 'approved') {
-        expect(await status.getByText(/^Publishing makes the page and exports public at http:\/\/127\.0\.0\.1:\d+\/t\/[a-z0-9-]+\/pillow-box-with-a-window\.$/).isVisible()).toBe(true);
+        expect(
+          await status
+            .getByText(/^Publishing makes the page and exports public at http:\/\/127\.0\.0\.1:\d+\/t\/[a-z0-9-]+\/pillow-box-with-a-window\.$/)
+            .isVisible(),
+        ).toBe(true);
         await shot(page, 'publish-approved');
       }
     }

@@ -13,6 +13,8 @@ export default defineConfig({
     testTimeout: 120_000,
     hookTimeout: 120_000,
     fileParallelism: false,
+    // A busy machine (several checkouts testing at once) can take longer than the 1 s default to redraw.
+    expect: { poll: { timeout: 15_000 } },
     pool: 'forks',
   },
 });

@@ -144,7 +144,7 @@ describe('the write-up in the browser', () => {
     await shot(other, 'write-up-conflict');
 
     const before = await articleText(page.request, tutorialId);
-    await other.getByRole('button', { name: 'Keep mine' }).click();
+    await other.getByRole('button', { name: 'Keep my version' }).click();
     await savedNow(other);
     expect(await banner.count()).toBe(0);
     const after = await articleText(page.request, tutorialId);

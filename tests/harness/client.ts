@@ -21,17 +21,26 @@ export class TestClient {
   async post(url: string, body?: object) {
     // The token first: superagent attaches cookies when the request is created.
     const token = await this.token();
-    return this.agent.post(url).set('X-CSRF-Token', token).send(body ?? {});
+    return this.agent
+      .post(url)
+      .set('X-CSRF-Token', token)
+      .send(body ?? {});
   }
   async patch(url: string, body?: object) {
     // The token first: superagent attaches cookies when the request is created.
     const token = await this.token();
-    return this.agent.patch(url).set('X-CSRF-Token', token).send(body ?? {});
+    return this.agent
+      .patch(url)
+      .set('X-CSRF-Token', token)
+      .send(body ?? {});
   }
   async put(url: string, body?: object) {
     // The token first: superagent attaches cookies when the request is created.
     const token = await this.token();
-    return this.agent.put(url).set('X-CSRF-Token', token).send(body ?? {});
+    return this.agent
+      .put(url)
+      .set('X-CSRF-Token', token)
+      .send(body ?? {});
   }
   async delete(url: string) {
     const token = await this.token();

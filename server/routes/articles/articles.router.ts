@@ -1,96 +1,118 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { docToMarkdown, markdownToDoc } from '@shared/editor';
+import { docToMarkdown } from '@shared/editor';
 import { idParams } from '@shared/schemas/studio';
-import { Revision } from '../../models';
-import { validate } from '../../middlewares/validate';
-import { currentUser, requireUser } from '../../middlewares/authenticate';
+import { versionQuery } from '@shared/schemas/publish';
+import { markdownImportSchema, saveArticleSchema, versionOnlySchema, type DraftPreviewDto } from '@shared/schemas/article';
+import { route } from '../../lib/route';
 import { authorize } from '../../policies';
-import { notFound } from '../../lib/http-error';
-import { loadTutorial } from '../../services/access';
-import { checkedDoc, draftFor, getArticle, isEmptyDoc, listRevisions, saveArticle } from '../../services/write-up';
-import { renderContext } from '../../services/render-context';
-
-const version = z.number().int().min(0);
-const saveSchema = z.object({ doc: z.record(z.string(), z.unknown()), version });
-const versionOnly = z.object({ version });
-const markdownImport = z.object({ markdown: z.string().max(2_000_000, 'The Markdown is too long'), version });
+import { exportSource, loadTutorial } from '../../services/access';
+import {
+  applyDraft,
+  checkedDoc,
+  findRevision,
+  getArticle,
+  importMarkdown,
+  listRevisions,
+  previewDraft,
+  restoreRevision,
+  saveArticle,
+} from '../../services/write-up';
+import { loadPublishBundle } from '../../services/publish/bundle';
+import { bundleRenderContext } from '../../services/publish/render-inputs';
+import { presentArticle, presentReplaced, presentRevision, presentRevisions, presentSaved } from '../../presenters/article.presenter';
 
 /** The write-up: article, first draft, revisions, Markdown in and out. */
 export function articlesRouter() {
   const r = Router();
-  r.use(['/tutorials', '/revisions'], requireUser);
 
-  r.get('/tutorials/:id/article', validate({ params: idParams }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'read');
-    res.json({ ...(await getArticle(tutorial)), abilities: { update: abilities.update } });
-  });
+  r.get(
+    '/tutorials/:id/article',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'readDraft', 'Readers see the published tutorial, not its workspace');
+      res.json(presentArticle(await getArticle(tutorial), abilities));
+    }),
+  );
 
-  r.put('/tutorials/:id/article', validate({ params: idParams, body: saveSchema }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'update', 'Only people who can edit this tutorial can change its write-up');
-    const doc = checkedDoc(req.body.doc);
-    res.json(await saveArticle({ tutorial, user: currentUser(req), doc, version: req.body.version }));
-  });
+  r.put(
+    '/tutorials/:id/article',
+    route({ params: idParams, body: saveArticleSchema }, async ({ params, body, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'update', 'Only people who can edit this tutorial can change its write-up');
+      res.json(presentSaved(await saveArticle({ tutorial, user, doc: checkedDoc(body.doc), version: body.version })));
+    }),
+  );
 
   // A preview: the draft is not saved until the maker applies it.
-  r.post('/tutorials/:id/draft', validate({ params: idParams }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'update');
-    const current = await getArticle(tutorial);
-    res.json({ doc: await draftFor(tutorial), replaces: !isEmptyDoc(current.doc), version: current.version });
-  });
+  r.post(
+    '/tutorials/:id/draft',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'update');
+      const preview: DraftPreviewDto = await previewDraft(tutorial);
+      res.json(preview);
+    }),
+  );
 
-  r.post('/tutorials/:id/draft/apply', validate({ params: idParams, body: versionOnly }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'update');
-    const doc = await draftFor(tutorial);
-    // The write-up it replaces is already kept as the newest revision; the draft starts a new one.
-    const saved = await saveArticle({ tutorial, user: currentUser(req), doc, version: req.body.version, note: 'First draft from the footage', newRevision: true });
-    res.json({ ...saved, doc });
-  });
+  r.post(
+    '/tutorials/:id/draft/apply',
+    route({ params: idParams, body: versionOnlySchema }, async ({ params, body, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'update');
+      res.json(presentReplaced(await applyDraft({ tutorial, user, version: body.version })));
+    }),
+  );
 
-  r.get('/tutorials/:id/revisions', validate({ params: idParams }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'read');
-    res.json({ revisions: await listRevisions(tutorial) });
-  });
+  r.get(
+    '/tutorials/:id/revisions',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'readRevisions', 'Revisions are for the studio’s team; students read the published write-up');
+      res.json(presentRevisions(await listRevisions(tutorial)));
+    }),
+  );
 
-  r.get('/revisions/:id', validate({ params: idParams }), async (req, res) => {
-    const rev = await Revision.findByPk(req.params.id as string);
-    if (!rev) throw notFound('Revision');
-    const { abilities } = await loadTutorial(req, rev.tutorialId);
-    authorize(abilities, 'read');
-    res.json({ id: rev.id, version: rev.version, note: rev.note, createdAt: rev.createdAt, doc: rev.doc });
-  });
+  r.get(
+    '/revisions/:id',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const revision = await findRevision(params.id);
+      const { abilities } = await loadTutorial(user, revision.tutorialId);
+      authorize(abilities, 'readRevisions', 'Revisions are for the studio’s team; students read the published write-up');
+      res.json(presentRevision(revision));
+    }),
+  );
 
-  r.post('/revisions/:id/restore', validate({ params: idParams, body: versionOnly }), async (req, res) => {
-    const rev = await Revision.findByPk(req.params.id as string);
-    if (!rev) throw notFound('Revision');
-    const { tutorial, abilities } = await loadTutorial(req, rev.tutorialId);
-    authorize(abilities, 'update');
-    const note = `Restored from version ${rev.version} (${rev.updatedAt.toISOString().slice(0, 16).replace('T', ' ')} UTC)`;
-    const saved = await saveArticle({ tutorial, user: currentUser(req), doc: checkedDoc(rev.doc), version: req.body.version, note, newRevision: true });
-    res.json({ ...saved, doc: rev.doc });
-  });
+  r.post(
+    '/revisions/:id/restore',
+    route({ params: idParams, body: versionOnlySchema }, async ({ params, body, user, res }) => {
+      const revision = await findRevision(params.id);
+      const { tutorial, abilities } = await loadTutorial(user, revision.tutorialId);
+      authorize(abilities, 'update');
+      res.json(presentReplaced(await restoreRevision({ tutorial, user, revision, version: body.version })));
+    }),
+  );
 
-  r.get('/tutorials/:id/article/markdown', validate({ params: idParams }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'read');
-    const { doc } = await getArticle(tutorial);
-    res.type('text/markdown; charset=utf-8');
-    res.attachment(`${tutorial.slug}.md`);
-    res.send(docToMarkdown(doc, await renderContext(tutorial)));
-  });
+  r.get(
+    '/tutorials/:id/article/markdown',
+    route({ params: idParams, query: versionQuery }, async ({ params, query, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'read');
+      // An export: what readers see of a published tutorial, unless its people ask for the draft.
+      const bundle = await loadPublishBundle(tutorial, await exportSource(user, tutorial, query.version));
+      res.type('text/markdown; charset=utf-8');
+      res.attachment(`${tutorial.slug}.md`);
+      res.send(docToMarkdown(bundle.doc, bundleRenderContext(bundle)));
+    }),
+  );
 
-  r.post('/tutorials/:id/article/markdown', validate({ params: idParams, body: markdownImport }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'update');
-    const doc = checkedDoc(markdownToDoc(req.body.markdown));
-    const saved = await saveArticle({ tutorial, user: currentUser(req), doc, version: req.body.version, note: 'Imported from Markdown', newRevision: true });
-    res.json({ ...saved, doc });
-  });
+  r.post(
+    '/tutorials/:id/article/markdown',
+    route({ params: idParams, body: markdownImportSchema }, async ({ params, body, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'update');
+      res.json(presentReplaced(await importMarkdown({ tutorial, user, markdown: body.markdown, version: body.version })));
+    }),
+  );
 
   return r;
 }

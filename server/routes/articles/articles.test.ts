@@ -44,7 +44,10 @@ describe('article: version check (W3)', () => {
   it('two saves racing on the same version: exactly one wins', async () => {
     const f = await makeStudio(app);
     const url = `/api/tutorials/${f.tutorial.id}/article`;
-    const [x, y] = await Promise.all([(await f.clientFor('maker')).put(url, { doc: doc('one'), version: 0 }), (await f.clientFor('owner')).put(url, { doc: doc('two'), version: 0 })]);
+    const [x, y] = await Promise.all([
+      (await f.clientFor('maker')).put(url, { doc: doc('one'), version: 0 }),
+      (await f.clientFor('owner')).put(url, { doc: doc('two'), version: 0 }),
+    ]);
     expect([x.status, y.status].sort()).toEqual([200, 409]);
   });
 });
@@ -76,10 +79,25 @@ describe('revisions', () => {
 });
 
 async function withFootage(f: StudioFixture) {
-  const rec = await Recording.create({ tutorialId: f.tutorial.id, originalName: 'x.mp4', mime: 'video/mp4', sizeBytes: 1, sourceKey: 'recordings/x/source.mp4', durationMs: 60_000, status: 'ready' });
+  const rec = await Recording.create({
+    tutorialId: f.tutorial.id,
+    originalName: 'x.mp4',
+    mime: 'video/mp4',
+    sizeBytes: 1,
+    sourceKey: 'recordings/x/source.mp4',
+    durationMs: 60_000,
+    status: 'ready',
+  });
   await Cue.bulkCreate([
     { recordingId: rec.id, position: 0, startMs: 0, endMs: 5000, text: 'um hi everyone so today we we are making a treat box', identifier: null },
-    { recordingId: rec.id, position: 1, startMs: 20000, endMs: 26000, text: 'okay so first cut the base four and a quarter by five and a half', identifier: null },
+    {
+      recordingId: rec.id,
+      position: 1,
+      startMs: 20000,
+      endMs: 26000,
+      text: 'okay so first cut the base four and a quarter by five and a half',
+      identifier: null,
+    },
     { recordingId: rec.id, position: 2, startMs: 40000, endMs: 46000, text: 'now score it at two and an eighth you know', identifier: null },
   ]);
   await Chapter.bulkCreate([
@@ -87,7 +105,18 @@ async function withFootage(f: StudioFixture) {
     { recordingId: rec.id, title: 'Cut the base', startMs: 20000 },
     { recordingId: rec.id, title: 'Score', startMs: 40000 },
   ]);
-  const still = await Still.create({ recordingId: rec.id, atMs: 22000, requestedMs: 22000, mode: 'exact', fileKey: 'recordings/x/stills/s.jpg', width: 640, height: 360, sharpness: null, caption: 'The base', alt: 'A kraft base panel' });
+  const still = await Still.create({
+    recordingId: rec.id,
+    atMs: 22000,
+    requestedMs: 22000,
+    mode: 'exact',
+    fileKey: 'recordings/x/stills/s.jpg',
+    width: 640,
+    height: 360,
+    sharpness: null,
+    caption: 'The base',
+    alt: 'A kraft base panel',
+  });
   return { rec, still };
 }
 
@@ -98,7 +127,7 @@ describe('first draft (W2)', () => {
     expect(res.status).toBe(409);
     expect(res.body.error).toMatch(/Footage/);
   });
-  it('one step per chapter with the chapter’s still; applying over a write-up keeps the old one as a revision', async () => {
+  it('a step per chapter with the chapter’s still; applying over a write-up keeps the old one as a revision', async () => {
     const f = await makeStudio(app);
     const { still } = await withFootage(f);
     const maker = await f.clientFor('maker');
@@ -106,8 +135,11 @@ describe('first draft (W2)', () => {
     const preview = await maker.post(`/api/tutorials/${f.tutorial.id}/draft`);
     expect(preview.body.replaces).toBe(true);
     const steps = (preview.body.doc.content as { type: string }[]).filter((n) => n.type === 'step');
-    expect(steps).toHaveLength(3);
+    // The introduction only greeted and said what we make: that goes to the intro, not a step.
+    expect(steps).toHaveLength(2);
     const json = JSON.stringify(preview.body.doc);
+    expect(json).toContain('Today we are making a treat box.');
+    expect(json).not.toMatch(/hi everyone/i);
     expect(json).toContain(still.id);
     expect(json).toContain('4 1/4 x 5 1/2 in');
     expect(json).not.toMatch(/\bum\b|okay so|you know/);

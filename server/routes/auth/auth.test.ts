@@ -10,7 +10,6 @@ import { createApp } from '@server/app';
 const app = testApp();
 const email = () => `${crypto.randomUUID()}@test.example`;
 
-
 describe('CSRF (OWASP CSRF Prevention: token on state-changing requests)', () => {
   it('refuses a state change without the X-CSRF-Token header with 403', async () => {
     const c = new TestClient(app);
@@ -21,7 +20,10 @@ describe('CSRF (OWASP CSRF Prevention: token on state-changing requests)', () =>
   it('refuses a token from another session', async () => {
     const a = new TestClient(app);
     const b = new TestClient(app);
-    const res = await b.agent.post('/api/auth/sign-in').set('X-CSRF-Token', await a.token()).send({ email: 'x@example.com', password: 'p' });
+    const res = await b.agent
+      .post('/api/auth/sign-in')
+      .set('X-CSRF-Token', await a.token())
+      .send({ email: 'x@example.com', password: 'p' });
     expect(res.status).toBe(403);
   });
 });
@@ -98,6 +100,17 @@ describe('POST /api/auth/sign-in and sign-out', () => {
     expect((await c.post('/api/auth/sign-out')).status).toBe(204);
     expect((await c.get('/api/auth/me')).status).toBe(401);
   });
+  it('the session answers 200 for everyone: null for a visitor, the person once signed in', async () => {
+    const u = await makeUser();
+    const c = new TestClient(app);
+    const before = await c.get('/api/auth/session');
+    expect(before.status).toBe(200);
+    expect(before.body).toEqual({ me: null });
+    await c.signIn(u.email, TEST_PASSWORD);
+    const after = await c.get('/api/auth/session');
+    expect(after.status).toBe(200);
+    expect(after.body.me.user.email).toBe(u.email);
+  });
   it('rate-limits sign-in attempts with 429', async () => {
     const limited = createApp({ rateLimit: { signIn: 3 } });
     const c = new TestClient(limited);
@@ -105,6 +118,25 @@ describe('POST /api/auth/sign-in and sign-out', () => {
     for (let i = 0; i < 5; i++) statuses.push((await c.post('/api/auth/sign-in', { email: 'nobody@example.com', password: 'wrong wrong wrong' })).status);
     expect(statuses.slice(0, 3)).toEqual([401, 401, 401]);
     expect(statuses[4]).toBe(429);
+    await limited.close();
+  });
+  it('counts only refused sign-ins: people signing in from one address one after another are let in', async () => {
+    const limited = createApp({ rateLimit: { signIn: 3 } });
+    const u = await makeUser();
+    const statuses = [];
+    for (let i = 0; i < 5; i++) {
+      const c = new TestClient(limited);
+      statuses.push((await c.post('/api/auth/sign-in', { email: u.email, password: TEST_PASSWORD })).status);
+    }
+    expect(statuses).toEqual([200, 200, 200, 200, 200]);
+    await limited.close();
+  });
+  it('counts every reset request, since each one sends mail', async () => {
+    const limited = createApp({ rateLimit: { signIn: 3 } });
+    const c = new TestClient(limited);
+    const statuses = [];
+    for (let i = 0; i < 4; i++) statuses.push((await c.post('/api/auth/reset-request', { email: `nobody${i}@example.com` })).status);
+    expect(statuses).toEqual([202, 202, 202, 429]);
     await limited.close();
   });
 });

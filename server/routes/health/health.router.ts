@@ -1,16 +1,16 @@
 import { Router } from 'express';
-import { sequelize } from '../../models';
+import { openRoute } from '../../lib/route';
+import { databaseUp } from '../../services/health';
 
 /** Liveness with the database state, for start scripts and load balancers. */
 export function healthRouter() {
   const r = Router();
-  r.get('/', async (_req, res) => {
-    try {
-      await sequelize.query('SELECT 1');
-      res.json({ status: 'ok', database: 'up' });
-    } catch {
-      res.status(503).json({ status: 'degraded', database: 'down' });
-    }
-  });
+  r.get(
+    '/',
+    openRoute({}, async ({ res }) => {
+      if (await databaseUp()) res.json({ status: 'ok', database: 'up' });
+      else res.status(503).json({ status: 'degraded', database: 'down' });
+    }),
+  );
   return r;
 }

@@ -1,26 +1,30 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { acceptInvitationSchema } from '@shared/schemas/auth';
-import { validate } from '../../middlewares/validate';
-import { currentUser, requireUser } from '../../middlewares/authenticate';
-import { acceptInvitation, studiosOf, usableInvitation } from '../../services/accounts';
-import { User } from '../../models';
+import { acceptInvitationSchema, type InvitationAcceptedDto } from '@shared/schemas/auth';
+import { openRoute, route } from '../../lib/route';
+import { acceptInvitation, invitationPreview, studiosOf } from '../../services/accounts';
+
+const tokenParams = z.object({ token: z.string().min(10) });
 
 /** Looking at and accepting an invitation from its e-mailed link. */
 export function invitationsRouter() {
   const r = Router();
 
-  r.get('/:token', validate({ params: z.object({ token: z.string().min(10) }) }), async (req, res) => {
-    const inv = await usableInvitation(req.params.token as string);
-    const hasAccount = Boolean(await User.findOne({ where: { email: inv.email }, attributes: ['id'] }));
-    res.json({ email: inv.email, role: inv.role, studio: { id: inv.studio!.id, name: inv.studio!.name }, hasAccount, expiresAt: inv.expiresAt });
-  });
+  r.get(
+    '/:token',
+    openRoute({ params: tokenParams }, async ({ params, res }) => {
+      res.json(await invitationPreview(params.token));
+    }),
+  );
 
-  r.post('/accept', requireUser, validate({ body: acceptInvitationSchema }), async (req, res) => {
-    const user = currentUser(req);
-    const { studioId } = await acceptInvitation(user, req.body.token);
-    res.json({ studioId, studios: await studiosOf(user.id) });
-  });
+  r.post(
+    '/accept',
+    route({ body: acceptInvitationSchema }, async ({ body, user, res }) => {
+      const { studioId } = await acceptInvitation(user, body.token);
+      const answer: InvitationAcceptedDto = { studioId, studios: await studiosOf(user.id) };
+      res.json(answer);
+    }),
+  );
 
   return r;
 }

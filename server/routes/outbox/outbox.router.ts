@@ -1,36 +1,53 @@
 import { Router } from 'express';
-import { Membership, OutboxMessage } from '../../models';
-import { currentUser, requireUser } from '../../middlewares/authenticate';
-import { forbidden, notFound } from '../../lib/http-error';
-import { validate } from '../../middlewares/validate';
+import type { OutboxDto, OutboxEntryDto } from '@shared/schemas/outbox';
 import { idParams } from '@shared/schemas/studio';
+import { NotFoundError } from '../../lib/errors';
+import { route } from '../../lib/route';
+import type { Config } from '../../config';
+import { mailboxAbilities, outboxRecipient } from '../../policies';
+import { clearMailFor, deleteMessageFor, mailFor, messageFor } from '../../services/outbox';
+import { presentOutboxMessage, presentOutboxSummary } from '../../presenters/outbox.presenter';
 
 /**
- * The local fake mailbox. It exists only while mail goes to the fake, and only studio owners
- * may read it: it is a development aid for following reset and invitation links.
+ * The signed-in person's own mail as the local fake caught it: the mailbox policy says when the
+ * Outbox exists (while mail goes to the fake) and whose mail it shows (`outboxRecipient`: only
+ * messages delivered to the person's address, whatever their role; another person's answers 404).
+ * Every caught message is in the loopback-only /dev/mail instead.
  */
-export function outboxRouter(enabled: boolean) {
+export function outboxRouter(config: Pick<Config, 'env' | 'mail'>) {
   const r = Router();
-  r.use((_req, _res, next) => next(enabled ? undefined : notFound('The outbox')));
-  r.use(requireUser, async (req, _res, next) => {
-    const owner = await Membership.findOne({ where: { userId: currentUser(req).id, role: 'owner' }, attributes: ['id'] });
-    next(owner ? undefined : forbidden('Only studio owners can read the outbox'));
-  });
+  r.use((_req, _res, next) => next(mailboxAbilities(config).outbox ? undefined : new NotFoundError('The outbox')));
 
-  r.get('/', async (_req, res) => {
-    const messages = await OutboxMessage.findAll({ order: [['createdAt', 'DESC']], limit: 200, attributes: ['id', 'from', 'to', 'subject', 'createdAt', 'attachments'] });
-    res.json({ messages });
-  });
+  r.get(
+    '/',
+    route({}, async ({ user, res }) => {
+      const messages = await mailFor(outboxRecipient(user));
+      res.json({ messages: messages.map(presentOutboxSummary) } satisfies OutboxDto);
+    }),
+  );
 
-  r.get('/:id', validate({ params: idParams }), async (req, res) => {
-    const m = await OutboxMessage.findByPk(req.params.id as string);
-    if (!m) throw notFound('Message');
-    res.json({ message: m });
-  });
+  r.get(
+    '/:id',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const m = await messageFor(outboxRecipient(user), params.id);
+      res.json({ message: presentOutboxMessage(m) } satisfies OutboxEntryDto);
+    }),
+  );
 
-  r.delete('/', async (_req, res) => {
-    await OutboxMessage.destroy({ where: {} });
-    res.status(204).end();
-  });
+  r.delete(
+    '/:id',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      await deleteMessageFor(outboxRecipient(user), params.id);
+      res.status(204).end();
+    }),
+  );
+
+  r.delete(
+    '/',
+    route({}, async ({ user, res }) => {
+      await clearMailFor(outboxRecipient(user));
+      res.status(204).end();
+    }),
+  );
   return r;
 }

@@ -1,3 +1,4 @@
+import type { AddressInfo } from 'node:net';
 import { existsSync, readdirSync, readFileSync, writeFileSync } from 'node:fs';
 import http from 'node:http';
 import path from 'node:path';
@@ -6,7 +7,7 @@ import { Cue, Recording, Tutorial } from '@server/models';
 import { config } from '@server/config';
 import { processRecording } from '@server/jobs/process-recording';
 import { startWorkers, stopQueue } from '@server/jobs';
-import { colourSteps, nearestStep, pixelAt, tempDir } from '@server/services/media/test-clips';
+import { colourSteps, ffmpegMake, nearestStep, pixelAt, tempDir } from '@server/services/media/test-clips';
 import { createApp } from '@server/app';
 import { testApp } from '../../../tests/harness/app';
 import { TestClient } from '../../../tests/harness/client';
@@ -43,12 +44,15 @@ async function readyRecording() {
 
 describe('POST /api/tutorials/:id/recordings', () => {
   it('401 signed out, 400 without a file, 403 for a student, 404 for an outsider', async () => {
-    expect((await (await f.clientFor('anonymous')).upload(`/api/tutorials/${f.tutorial.id}/recordings`, 'file', clip, 'a.mp4')).status).toBe(401);
+    // Refusals come before the body is read: a small body, so the client has sent it all before the answer
+    // (a large one can meet a closed socket, EPIPE, when the refusal is quick).
+    const small = Buffer.from('not read');
+    expect((await (await f.clientFor('anonymous')).upload(`/api/tutorials/${f.tutorial.id}/recordings`, 'file', small, 'a.mp4')).status).toBe(401);
     const maker = await f.clientFor('maker');
     const none = await maker.post(`/api/tutorials/${f.tutorial.id}/recordings`, {});
     expect(none.status).toBe(400);
-    expect((await (await f.clientFor('student')).upload(`/api/tutorials/${f.tutorial.id}/recordings`, 'file', clip, 'a.mp4')).status).toBe(403);
-    expect((await (await f.clientFor('outsider')).upload(`/api/tutorials/${f.tutorial.id}/recordings`, 'file', clip, 'a.mp4')).status).toBe(404);
+    expect((await (await f.clientFor('student')).upload(`/api/tutorials/${f.tutorial.id}/recordings`, 'file', small, 'a.mp4')).status).toBe(403);
+    expect((await (await f.clientFor('outsider')).upload(`/api/tutorials/${f.tutorial.id}/recordings`, 'file', small, 'a.mp4')).status).toBe(404);
   });
 
   it('refuses a text file renamed .mp4 with 415 by its signature (OWASP File Upload), leaving no row and no file', async () => {
@@ -57,9 +61,17 @@ describe('POST /api/tutorials/:id/recordings', () => {
     const before = await Recording.count({ where: { tutorialId: f.tutorial.id } });
     const res = await uploadClip(fake, 'notes.mp4');
     expect(res.status).toBe(415);
-    expect(res.body.error).toMatch(/not a video/);
+    // what it found first, then what to do
+    expect(res.body.error).toBe('“notes.mp4” is text, not a video. Upload the recording itself: an MP4, MOV, WebM or MKV file.');
     expect(await Recording.count({ where: { tutorialId: f.tutorial.id } })).toBe(before);
     expect(tmpFiles()).toEqual([]);
+  });
+
+  it('says a picture is a picture (its PNG signature), not a video', async () => {
+    const png = await ffmpegMake(path.join(dir, 'cover.mp4.png'), ['-f', 'lavfi', '-i', 'color=c=red:s=8x8', '-frames:v', '1', '-f', 'image2']);
+    const res = await uploadClip(png, 'cover.mp4');
+    expect(res.status).toBe(415);
+    expect(res.body.error).toBe('“cover.mp4” is a picture (PNG), not a video. Upload the recording itself: an MP4, MOV, WebM or MKV file.');
   });
 
   it('stores a video under a generated name and processes it: probe, 720p preview, poster, thumbnails', async () => {
@@ -91,14 +103,20 @@ describe('POST /api/tutorials/:id/recordings', () => {
 
   it('an upload cut off half way leaves no row and no file behind', async () => {
     const server = app.listen(0);
-    const port = (server.address() as import('node:net').AddressInfo).port;
+    const port = (server.address() as AddressInfo).port;
     const c = await f.clientFor('maker');
     const token = await c.token();
     const cookie = (await c.agent.get('/api/auth/me')).request.cookies as unknown as string;
     const before = await Recording.count({ where: { tutorialId: f.tutorial.id } });
     let during = 0;
     await new Promise<void>((resolve) => {
-      const req = http.request({ host: '127.0.0.1', port, path: `/api/tutorials/${f.tutorial.id}/recordings`, method: 'POST', headers: { cookie, 'x-csrf-token': token, 'content-type': 'multipart/form-data; boundary=XyZ', 'content-length': 50_000_000 } });
+      const req = http.request({
+        host: '127.0.0.1',
+        port,
+        path: `/api/tutorials/${f.tutorial.id}/recordings`,
+        method: 'POST',
+        headers: { cookie, 'x-csrf-token': token, 'content-type': 'multipart/form-data; boundary=XyZ', 'content-length': 50_000_000 },
+      });
       req.on('error', () => resolve());
       req.write('--XyZ\r\nContent-Disposition: form-data; name="file"; filename="big.mp4"\r\nContent-Type: video/mp4\r\n\r\n');
       req.write(readFileSync(clip));
@@ -148,11 +166,15 @@ describe('media serving', () => {
     const rec = await Recording.findByPk(id);
     const whole = readFileSync(path.join(config.mediaDir, rec!.previewKey!));
     const c = await f.clientFor('maker');
-    const res = await c.get(`/media/recordings/${id}/preview.mp4`).set('Range', 'bytes=100-199').buffer(true).parse((r, cb) => {
-      const chunks: Buffer[] = [];
-      r.on('data', (d: Buffer) => chunks.push(d));
-      r.on('end', () => cb(null, Buffer.concat(chunks)));
-    });
+    const res = await c
+      .get(`/media/recordings/${id}/preview.mp4`)
+      .set('Range', 'bytes=100-199')
+      .buffer(true)
+      .parse((r, cb) => {
+        const chunks: Buffer[] = [];
+        r.on('data', (d: Buffer) => chunks.push(d));
+        r.on('end', () => cb(null, Buffer.concat(chunks)));
+      });
     expect(res.status).toBe(206);
     expect(res.headers['content-range']).toBe(`bytes 100-199/${whole.length}`);
     expect(Buffer.compare(res.body as Buffer, whole.subarray(100, 200))).toBe(0);
@@ -171,7 +193,8 @@ describe('media serving', () => {
 });
 
 describe('transcripts', () => {
-  const vtt = 'WEBVTT\n\n00:00.000 --> 00:02.000\nFirst cut the base panel four and a quarter by five and a half\n\n00:02.000 --> 00:04.500\nNext we score it at two and an eighth\n';
+  const vtt =
+    'WEBVTT\n\n00:00.000 --> 00:02.000\nFirst cut the base panel four and a quarter by five and a half\n\n00:02.000 --> 00:04.500\nNext we score it at two and an eighth\n';
   it('parses WebVTT into cues; a malformed file answers 422 with the line and keeps the previous cues', async () => {
     const id = await readyRecording();
     const c = await f.clientFor('maker');
@@ -190,6 +213,28 @@ describe('transcripts', () => {
   });
 });
 
+describe('transcripts read with notes (issue 11)', () => {
+  it('a title line before the first timed line is skipped with a note; a WebVTT cue the standard drops is named', async () => {
+    const id = await readyRecording();
+    const c = await f.clientFor('maker');
+    const titled = await c.upload(
+      `/api/recordings/${id}/transcript`,
+      'file',
+      Buffer.from('# Session 3 transcript\n\n0:00 Cut the base.\n0:05 Score it.\n'),
+      'talk.txt',
+    );
+    expect(titled.status).toBe(201);
+    expect(titled.body).toMatchObject({ format: 'plain', cueCount: 2, notices: [expect.stringMatching(/^line 1: skipped a title/)] });
+    const vtt = 'WEBVTT\n\n00:00.000 --> 00:02.000 Fold\nFold the flap.\n\n00:03.000 --> 00:02.000\nback\n\nstray words\n';
+    const read = await c.upload(`/api/recordings/${id}/transcript`, 'file', Buffer.from(vtt.replace('Fold the', 'Fo\0ld the')), 'talk.vtt');
+    expect(read.status).toBe(201);
+    expect(read.body.cueCount).toBe(2);
+    expect(read.body.notices.map((n: string) => n.split(':')[0])).toEqual(['line 3', 'line 4', 'line 6', 'line 9']);
+    const cues = await c.get(`/api/recordings/${id}/cues`);
+    expect(cues.body.cues[0].text).toBe('Fo\uFFFDld the flap.');
+  });
+});
+
 describe('chapters', () => {
   it('creates, lists in time order, renames, retimes, deletes; suggests from cue phrases', async () => {
     const id = await readyRecording();
@@ -201,12 +246,49 @@ describe('chapters', () => {
     const b = await c.post(`/api/recordings/${id}/chapters`, { title: 'Intro', startMs: 0 });
     expect([a.status, b.status]).toEqual([201, 201]);
     expect((await c.get(`/api/recordings/${id}/chapters`)).body.chapters.map((x: { title: string }) => x.title)).toEqual(['Intro', 'Score']);
-    expect((await c.patch(`/api/chapters/${a.body.id}`, { title: 'Score the walls', startMs: 2500 })).body).toMatchObject({ title: 'Score the walls', startMs: 2500 });
+    expect((await c.patch(`/api/chapters/${a.body.id}`, { title: 'Score the walls', startMs: 2500 })).body).toMatchObject({
+      title: 'Score the walls',
+      startMs: 2500,
+    });
     expect((await (await f.clientFor('student')).patch(`/api/chapters/${a.body.id}`, { title: 'x' })).status).toBe(403);
     expect((await c.delete(`/api/chapters/${a.body.id}`)).status).toBe(204);
     const sug = await c.get(`/api/recordings/${id}/chapter-suggestions`);
     expect(sug.status).toBe(200);
     expect(Array.isArray(sug.body.suggestions)).toBe(true);
+  });
+});
+
+describe('chapters and the write-up’s links to their time', () => {
+  it('a retimed chapter moves the steps linked to it; a deleted one leaves them at their time, no longer following it', async () => {
+    const g = await makeStudio(app);
+    const c = await g.clientFor('maker');
+    const up = await c.upload(`/api/tutorials/${g.tutorial.id}/recordings`, 'file', clip, 'steps.mp4');
+    await processRecording(up.body.id);
+    const ch = (await c.post(`/api/recordings/${up.body.id}/chapters`, { title: 'Fold the flaps', startMs: 2000 })).body;
+    const step = (atMs: number, chapterId: string | null, title: string) => ({
+      type: 'step',
+      attrs: { atMs, chapterId },
+      content: [{ type: 'stepTitle', content: [{ type: 'text', text: title }] }],
+    });
+    const doc = { type: 'doc', content: [step(2000, ch.id, 'Fold the flaps'), step(4000, null, 'Close the box')] };
+    expect((await c.put(`/api/tutorials/${g.tutorial.id}/article`, { doc, version: 0 })).status).toBe(200);
+    const steps = async () =>
+      ((await c.get(`/api/tutorials/${g.tutorial.id}/article`)).body.doc.content as { attrs: { atMs: number; chapterId: string | null } }[]).map((n) => [
+        n.attrs.atMs,
+        n.attrs.chapterId,
+      ]);
+    await c.patch(`/api/chapters/${ch.id}`, { startMs: 2500 });
+    expect(await steps()).toEqual([
+      [2500, ch.id],
+      [4000, null],
+    ]);
+    expect((await c.delete(`/api/chapters/${ch.id}`)).status).toBe(204);
+    expect(await steps()).toEqual([
+      [2500, null],
+      [4000, null],
+    ]);
+    const revisions = (await c.get(`/api/tutorials/${g.tutorial.id}/revisions`)).body.revisions as { note: string }[];
+    expect(revisions.map((r) => r.note)).toContain('Chapter “Fold the flaps” deleted: its steps keep their time');
   });
 });
 

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { Membership } from '@server/models';
+import { Invitation, Membership } from '@server/models';
 import { lastMailTo } from '../../../tests/harness/mail';
 import { testApp } from '../../../tests/harness/app';
 import { makeStudio } from '../../../tests/harness/factories';
@@ -37,6 +37,52 @@ describe('invitations', () => {
     const res = await outsider.post('/api/invitations/accept', { token });
     expect(res.status).toBe(200);
     expect(await Membership.findOne({ where: { userId: f.outsider.id, studioId: f.studio.id } })).toMatchObject({ role: 'maker' });
+  });
+  it('inviting an address with an open invitation sends it again: one row, the new role, a new link, the old link dead', async () => {
+    const f = await makeStudio(app);
+    const owner = await f.clientFor('owner');
+    const email = `${crypto.randomUUID()}@test.example`;
+    const first = await owner.post(`/api/studios/${f.studio.id}/invitations`, { email, role: 'student' });
+    expect(first.status).toBe(201);
+    expect(first.body.resent).toBe(false);
+    const oldToken = (await lastMailTo(email)).text.match(/\/invite\/([\w-]+)/)![1];
+    const again = await owner.post(`/api/studios/${f.studio.id}/invitations`, { email: email.toUpperCase(), role: 'maker' });
+    expect(again.status).toBe(200);
+    expect(again.body).toMatchObject({ id: first.body.id, resent: true, email, role: 'maker' });
+    const list = await owner.get(`/api/studios/${f.studio.id}/members`);
+    expect(list.body.invitations.filter((i: { email: string }) => i.email === email)).toHaveLength(1);
+    const newToken = (await lastMailTo(email)).text.match(/\/invite\/([\w-]+)/)![1];
+    expect(newToken).not.toBe(oldToken);
+    expect((await new TestClient(app).get(`/api/invitations/${oldToken}`)).status).toBe(404);
+    expect((await new TestClient(app).get(`/api/invitations/${newToken}`)).body).toMatchObject({ email, role: 'maker' });
+  });
+  it('accepting removes every open invitation of that address to the studio', async () => {
+    const f = await makeStudio(app);
+    const owner = await f.clientFor('owner');
+    await owner.post(`/api/studios/${f.studio.id}/invitations`, { email: f.outsider.email, role: 'maker' });
+    const token = (await lastMailTo(f.outsider.email)).text.match(/\/invite\/([\w-]+)/)![1];
+    // A second open row for the same address, as a class registration's mail makes one.
+    await Invitation.create({
+      studioId: f.studio.id,
+      email: f.outsider.email,
+      role: 'student',
+      tokenHash: crypto.randomUUID(),
+      expiresAt: new Date(Date.now() + 86_400_000),
+    });
+    expect((await (await f.clientFor('outsider')).post('/api/invitations/accept', { token })).status).toBe(200);
+    expect(await Invitation.count({ where: { studioId: f.studio.id, email: f.outsider.email, acceptedAt: null } })).toBe(0);
+    expect((await owner.get(`/api/studios/${f.studio.id}/members`)).body.invitations).toHaveLength(0);
+  });
+  it('signing up from an invitation removes the other open invitations to the studio', async () => {
+    const f = await makeStudio(app);
+    const owner = await f.clientFor('owner');
+    const email = `${crypto.randomUUID()}@test.example`;
+    await owner.post(`/api/studios/${f.studio.id}/invitations`, { email, role: 'maker' });
+    const token = (await lastMailTo(email)).text.match(/\/invite\/([\w-]+)/)![1];
+    await Invitation.create({ studioId: f.studio.id, email, role: 'student', tokenHash: crypto.randomUUID(), expiresAt: new Date(Date.now() + 86_400_000) });
+    const res = await new TestClient(app).post('/api/auth/sign-up', { name: 'New Person', email, password: 'the invitation worked', invitationToken: token });
+    expect(res.status).toBe(201);
+    expect((await owner.get(`/api/studios/${f.studio.id}/members`)).body.invitations).toHaveLength(0);
   });
 });
 

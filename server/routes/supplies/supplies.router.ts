@@ -1,57 +1,79 @@
 import { Router } from 'express';
 import { idParams } from '@shared/schemas/studio';
 import { createSupplySchema, disclosureSchema, updateSupplySchema } from '@shared/schemas/supply';
-import { Supply } from '../../models';
-import { loadSupplies, presentSupply } from '../../services/supplies';
-import { validate } from '../../middlewares/validate';
-import { requireUser } from '../../middlewares/authenticate';
+import { route } from '../../lib/route';
 import { authorize } from '../../policies';
-import { notFound } from '../../lib/http-error';
 import { loadTutorial } from '../../services/access';
+import { addSupply, deleteSupply, findSupply, loadSupplies, setDisclosure, updateSupply } from '../../services/supplies';
+import { presentSupplies, presentSupply } from '../../presenters/supply.presenter';
+import { supplyChecks } from '../../services/supply-checks';
+import type { SupplyChecksDto } from '@shared/schemas/supply';
 
-/** Supplies CRUD under /api. */
+/**
+ * Supplies under /api. The model for every router: each handler parses (the `route` schemas),
+ * loads (404), authorizes (403), calls a service and presents a DTO from shared/schemas.
+ */
 export function suppliesRouter() {
   const r = Router();
-  r.use(['/tutorials', '/supplies'], requireUser);
 
-  r.get('/tutorials/:id/supplies', validate({ params: idParams }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'read');
-    res.json({ ...(await loadSupplies(tutorial)), abilities: { update: abilities.update } });
-  });
+  r.get(
+    '/tutorials/:id/supplies',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'readDraft', 'Readers see the published tutorial, not its workspace');
+      res.json(presentSupplies(await loadSupplies(tutorial), abilities));
+    }),
+  );
 
-  r.post('/tutorials/:id/supplies', validate({ params: idParams, body: createSupplySchema }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'update');
-    const last = (await Supply.max('position', { where: { tutorialId: tutorial.id } })) as number | null;
-    const s = await Supply.create({ ...req.body, tutorialId: tutorial.id, position: (last ?? -1) + 1 });
-    res.status(201).json(presentSupply(s));
-  });
+  // The supplies' sheet counts against the sheet plan (the Supplies and Publish sections' warnings).
+  r.get(
+    '/tutorials/:id/supply-checks',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'read');
+      const answer: SupplyChecksDto = { ...(await supplyChecks(tutorial)), abilities: { update: abilities.update } };
+      res.json(answer);
+    }),
+  );
 
-  r.patch('/supplies/:id', validate({ params: idParams, body: updateSupplySchema }), async (req, res) => {
-    const s = await Supply.findByPk(req.params.id as string);
-    if (!s) throw notFound('Supply');
-    const { abilities } = await loadTutorial(req, s.tutorialId);
-    authorize(abilities, 'update');
-    await s.update(req.body);
-    res.json(presentSupply(s));
-  });
+  r.post(
+    '/tutorials/:id/supplies',
+    route({ params: idParams, body: createSupplySchema }, async ({ params, body, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'update');
+      res.status(201).json(presentSupply(await addSupply(tutorial, body)));
+    }),
+  );
 
-  r.delete('/supplies/:id', validate({ params: idParams }), async (req, res) => {
-    const s = await Supply.findByPk(req.params.id as string);
-    if (!s) throw notFound('Supply');
-    const { abilities } = await loadTutorial(req, s.tutorialId);
-    authorize(abilities, 'update');
-    await s.destroy();
-    res.status(204).end();
-  });
+  r.patch(
+    '/supplies/:id',
+    route({ params: idParams, body: updateSupplySchema }, async ({ params, body, user, res }) => {
+      const supply = await findSupply(params.id);
+      const { abilities } = await loadTutorial(user, supply.tutorialId);
+      authorize(abilities, 'update');
+      res.json(presentSupply(await updateSupply(supply, body)));
+    }),
+  );
 
-  r.put('/tutorials/:id/disclosure', validate({ params: idParams, body: disclosureSchema }), async (req, res) => {
-    const { tutorial, abilities } = await loadTutorial(req, req.params.id as string);
-    authorize(abilities, 'update');
-    await tutorial.update({ disclosure: req.body.disclosure || null });
-    res.json((await loadSupplies(tutorial)).disclosure);
-  });
+  r.delete(
+    '/supplies/:id',
+    route({ params: idParams }, async ({ params, user, res }) => {
+      const supply = await findSupply(params.id);
+      const { abilities } = await loadTutorial(user, supply.tutorialId);
+      authorize(abilities, 'update');
+      await deleteSupply(supply);
+      res.status(204).end();
+    }),
+  );
+
+  r.put(
+    '/tutorials/:id/disclosure',
+    route({ params: idParams, body: disclosureSchema }, async ({ params, body, user, res }) => {
+      const { tutorial, abilities } = await loadTutorial(user, params.id);
+      authorize(abilities, 'update');
+      res.json(await setDisclosure(tutorial, body.disclosure));
+    }),
+  );
 
   return r;
 }

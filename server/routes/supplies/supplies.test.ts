@@ -22,7 +22,13 @@ describe('supplies', () => {
     const url = `/api/tutorials/${f.tutorial.id}/supplies`;
     await maker.post(url, { category: 'cardstock', name: 'Kraft cardstock 12 x 12', quantity: '2 sheets' });
     expect((await maker.get(url)).body.disclosure.required).toBe(false);
-    const s = await maker.post(url, { category: 'adhesive', name: 'Liquid glue', url: 'https://shop.example/glue', sponsored: true, discountCode: 'JUNIPER10' });
+    const s = await maker.post(url, {
+      category: 'adhesive',
+      name: 'Liquid glue',
+      url: 'https://shop.example/glue',
+      sponsored: true,
+      discountCode: 'JUNIPER10',
+    });
     expect(s.status).toBe(201);
     const list = await maker.get(url);
     expect(list.body.supplies.map((x: { name: string }) => x.name)).toEqual(['Kraft cardstock 12 x 12', 'Liquid glue']);

@@ -42,6 +42,17 @@ describe('GET /api/studios/:id/tutorials', () => {
     expect(staff.body.tutorials).toHaveLength(2);
     expect(student.body.tutorials.map((t: { title: string }) => t.title)).toEqual(['Done']);
     expect(student.body.tutorials[0].abilities.update).toBe(false);
+    expect(student.body.abilities.seeAllTutorials).toBe(false);
+  });
+  it("a student's state filter filters: published finds the published ones, another state finds none", async () => {
+    const f = await makeStudio(app);
+    await Tutorial.create({ studioId: f.studio.id, authorId: f.users.maker.id, title: 'Done', slug: 'done', state: 'published' });
+    const student = await f.clientFor('student');
+    const list = async (state: string) =>
+      (await student.get(`/api/studios/${f.studio.id}/tutorials?state=${state}`)).body.tutorials.map((t: { title: string }) => t.title);
+    expect(await list('published')).toEqual(['Done']);
+    expect(await list('draft')).toEqual([]);
+    expect(await list('in_review')).toEqual([]);
   });
   it('400 for an unknown state filter', async () => {
     const f = await makeStudio(app);

@@ -17,8 +17,29 @@ import { htmlToDoc } from './html-to-doc';
 import { sanitizeHtml } from './sanitize-html';
 
 const ACTIVE_TAGS = new Set([
-  'script', 'style', 'iframe', 'frame', 'frameset', 'object', 'embed', 'applet', 'svg', 'math', 'link', 'meta',
-  'base', 'form', 'input', 'button', 'textarea', 'select', 'template', 'noscript', 'video', 'audio', 'source',
+  'script',
+  'style',
+  'iframe',
+  'frame',
+  'frameset',
+  'object',
+  'embed',
+  'applet',
+  'svg',
+  'math',
+  'link',
+  'meta',
+  'base',
+  'form',
+  'input',
+  'button',
+  'textarea',
+  'select',
+  'template',
+  'noscript',
+  'video',
+  'audio',
+  'source',
 ]);
 const URL_ATTRS = new Set(['href', 'src', 'cite', 'action', 'formaction', 'poster', 'data', 'background', 'dynsrc', 'lowsrc', 'xlink:href', 'srcset']);
 const SAFE_PROTOCOLS = new Set(['http:', 'https:', 'mailto:']);
@@ -30,7 +51,9 @@ function renderedParts(html: string): string[] {
 
 /** Problems a browser would act on, found by parsing the HTML the way a browser does (happy-dom). */
 function activeParts(html: string): string[] {
-  const win = new Window({ settings: { disableJavaScriptEvaluation: true, disableJavaScriptFileLoading: true, disableCSSFileLoading: true, disableIframePageLoading: true } });
+  const win = new Window({
+    settings: { disableJavaScriptEvaluation: true, disableJavaScriptFileLoading: true, disableCSSFileLoading: true, disableIframePageLoading: true },
+  });
   try {
     const doc = new win.DOMParser().parseFromString(`<!doctype html><html><head></head><body>${html}</body></html>`, 'text/html');
     const found: string[] = [];
@@ -44,8 +67,9 @@ function activeParts(html: string): string[] {
         if (n === 'style' || n === 'srcdoc') found.push(`${tag}[${n}]`);
         if (URL_ATTRS.has(n)) {
           // Browsers strip ASCII whitespace and controls from URLs before reading the scheme.
+          // eslint-disable-next-line no-control-regex -- the controls are what this strips
           const cleaned = String(value ?? '').replace(/[\u0000-\u0020\u007F]/g, '');
-          let protocol = 'invalid';
+          let protocol: string;
           try {
             protocol = new URL(cleaned, 'https://base.invalid/').protocol;
           } catch {
@@ -58,7 +82,7 @@ function activeParts(html: string): string[] {
     }
     return found;
   } finally {
-    win.happyDOM.abort();
+    void win.happyDOM.abort();
     win.close();
   }
 }
@@ -72,8 +96,14 @@ const VECTORS: [string, string][] = [
   ['img onerror', '<img src=x onerror=alert(1)>'],
   ['img javascript src', `<IMG SRC="javascript:alert('XSS');">`],
   ['img no quotes, mixed case', `<IMG SRC=JaVaScRiPt:alert('XSS')>`],
-  ['img decimal entities', '<IMG SRC=&#106;&#97;&#118;&#97;&#115;&#99;&#114;&#105;&#112;&#116;&#58;&#97;&#108;&#101;&#114;&#116;&#40;&#39;&#88;&#83;&#83;&#39;&#41;>'],
-  ['img decimal entities without semicolons, padded', '<IMG SRC=&#0000106&#0000097&#0000118&#0000097&#0000115&#0000099&#0000114&#0000105&#0000112&#0000116&#0000058&#0000097&#0000108&#0000101&#0000114&#0000116&#0000040&#0000039&#0000088&#0000083&#0000083&#0000039&#0000041>'],
+  [
+    'img decimal entities',
+    '<IMG SRC=&#106;&#97;&#118;&#97;&#115;&#99;&#114;&#105;&#112;&#116;&#58;&#97;&#108;&#101;&#114;&#116;&#40;&#39;&#88;&#83;&#83;&#39;&#41;>',
+  ],
+  [
+    'img decimal entities without semicolons, padded',
+    '<IMG SRC=&#0000106&#0000097&#0000118&#0000097&#0000115&#0000099&#0000114&#0000105&#0000112&#0000116&#0000058&#0000097&#0000108&#0000101&#0000114&#0000116&#0000040&#0000039&#0000088&#0000083&#0000083&#0000039&#0000041>',
+  ],
   ['img hex entities', '<IMG SRC=&#x6A&#x61&#x76&#x61&#x73&#x63&#x72&#x69&#x70&#x74&#x3A&#x61&#x6C&#x65&#x72&#x74&#x28&#x27&#x58&#x53&#x53&#x27&#x29>'],
   ['embedded tab', `<IMG SRC="jav	ascript:alert('XSS');">`],
   ['embedded encoded tab', `<IMG SRC="jav&#x09;ascript:alert('XSS');">`],
@@ -105,7 +135,10 @@ const VECTORS: [string, string][] = [
   ['event handler without a tag it fits', '<p onmouseover="alert(1)">hover</p>'],
   ['noscript title break-out (mutation XSS, from memory)', '<noscript><p title="</noscript><img src=x onerror=alert(1)>"></p></noscript>'],
   ['math style mutation (from memory)', '<math><mtext><table><mglyph><style><img src=x onerror=alert(1)>'],
-  ['our own nodes carrying payloads', '<figure data-type="still"><img src="javascript:alert(1)" onerror="alert(1)"><figcaption><script>alert(1)</script></figcaption></figure><section data-type="step" data-at-ms="1 onload=alert(1)"><h3 data-type="step-title" onclick="alert(1)">T</h3></section>'],
+  [
+    'our own nodes carrying payloads',
+    '<figure data-type="still"><img src="javascript:alert(1)" onerror="alert(1)"><figcaption><script>alert(1)</script></figcaption></figure><section data-type="step" data-at-ms="1 onload=alert(1)"><h3 data-type="step-title" onclick="alert(1)">T</h3></section>',
+  ],
 ];
 
 describe('pasted HTML never comes back executable (OWASP XSS Filter Evasion Cheat Sheet)', () => {
@@ -136,7 +169,15 @@ describe('Markdown with the same payloads never comes back executable (OWASP XSS
   });
 
   it('script URLs in Markdown links and images, in every case and with entities', () => {
-    const md = ['[a](javascript:alert(1))', '[b](JaVaScRiPt:alert(1))', '[c](jav&#x09;ascript:alert(1))', '[d](&#x6A;avascript:alert(1))', '[e](data:text/html,x)', '![f](data:image/svg+xml,x)', '<javascript:alert(1)>'].join('\n\n');
+    const md = [
+      '[a](javascript:alert(1))',
+      '[b](JaVaScRiPt:alert(1))',
+      '[c](jav&#x09;ascript:alert(1))',
+      '[d](&#x6A;avascript:alert(1))',
+      '[e](data:text/html,x)',
+      '![f](data:image/svg+xml,x)',
+      '<javascript:alert(1)>',
+    ].join('\n\n');
     const html = renderDocHtml(markdownToDoc(md));
     expect(activeParts(html)).toEqual([]);
     // "jav&#x09;ascript:" is decoded and percent-encoded by markdown-it into a harmless relative path.
@@ -145,8 +186,14 @@ describe('Markdown with the same payloads never comes back executable (OWASP XSS
   });
 });
 
-const link = (href: string): JSONContent => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'click', marks: [{ type: 'link', attrs: { href } }] }] }] });
-const still = (src: string, extra: Record<string, unknown> = {}): JSONContent => ({ type: 'doc', content: [{ type: 'still', attrs: { src, alt: 'x', ...extra } }] });
+const link = (href: string): JSONContent => ({
+  type: 'doc',
+  content: [{ type: 'paragraph', content: [{ type: 'text', text: 'click', marks: [{ type: 'link', attrs: { href } }] }] }],
+});
+const still = (src: string, extra: Record<string, unknown> = {}): JSONContent => ({
+  type: 'doc',
+  content: [{ type: 'still', attrs: { src, alt: 'x', ...extra } }],
+});
 
 // The same address tricks sent as document JSON (OWASP XSS Filter Evasion Cheat Sheet, URL entries).
 const JSON_VECTORS: [string, JSONContent][] = [
@@ -161,10 +208,22 @@ const JSON_VECTORS: [string, JSONContent][] = [
   ['still javascript:', still('javascript:alert(1)')],
   ['still data: svg', still('data:image/svg+xml;base64,PHN2ZyBvbmxvYWQ9YWxlcnQoMSk+')],
   ['still alt breaking out of the attribute', still('/media/a.jpg', { alt: '"><script>alert(1)</script>', caption: '<img src=x onerror=alert(1)>' })],
-  ['step time as markup', { type: 'doc', content: [{ type: 'step', attrs: { atMs: '0" onclick="alert(1)' }, content: [{ type: 'stepTitle', content: [{ type: 'text', text: 'x' }] }] }] }],
-  ['heading level as markup', { type: 'doc', content: [{ type: 'heading', attrs: { level: '1><script>alert(1)</script' }, content: [{ type: 'text', text: 'x' }] }] }],
+  [
+    'step time as markup',
+    {
+      type: 'doc',
+      content: [{ type: 'step', attrs: { atMs: '0" onclick="alert(1)' }, content: [{ type: 'stepTitle', content: [{ type: 'text', text: 'x' }] }] }],
+    },
+  ],
+  [
+    'heading level as markup',
+    { type: 'doc', content: [{ type: 'heading', attrs: { level: '1><script>alert(1)</script' }, content: [{ type: 'text', text: 'x' }] }] },
+  ],
   ['unknown script node', { type: 'doc', content: [{ type: 'script', content: [{ type: 'text', text: 'alert(1)' }] }] }],
-  ['unknown mark', { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'x', marks: [{ type: 'onclick', attrs: { handler: 'alert(1)' } }] }] }] }],
+  [
+    'unknown mark',
+    { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'x', marks: [{ type: 'onclick', attrs: { handler: 'alert(1)' } }] }] }] },
+  ],
 ];
 
 describe('document JSON never comes back executable (OWASP XSS Filter Evasion Cheat Sheet)', () => {
@@ -187,7 +246,10 @@ describe('document JSON never comes back executable (OWASP XSS Filter Evasion Ch
   });
 
   it('refuses an unsafe video address for the "Watch at" links, keeping the step', () => {
-    const doc: JSONContent = { type: 'doc', content: [{ type: 'step', attrs: { atMs: 1000 }, content: [{ type: 'stepTitle', content: [{ type: 'text', text: 'x' }] }] }] };
+    const doc: JSONContent = {
+      type: 'doc',
+      content: [{ type: 'step', attrs: { atMs: 1000 }, content: [{ type: 'stepTitle', content: [{ type: 'text', text: 'x' }] }] }],
+    };
     const html = renderDocHtml(doc, { videoUrl: 'javascript:alert(1)//' });
     expect(activeParts(html)).toEqual([]);
     expect(html).toBe('<ol class="cw-steps"><li class="cw-step" id="step-1"><h3>x</h3></li></ol>');

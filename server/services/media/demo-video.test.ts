@@ -33,12 +33,17 @@ describe('generateDemoVideo', () => {
     const still = join(dir, 'scene-2.jpg');
     await grabFrame(out, 2000, still);
     const [r, g, b] = await pixelAt(still, 4, 100);
-    for (const [got, want] of [[r, 0x6e], [g, 0x8b], [b, 0x74]]) expect(Math.abs(got - want)).toBeLessThanOrEqual(10);
+    for (const [got, want] of [
+      [r, 0x6e],
+      [g, 0x8b],
+      [b, 0x74],
+    ])
+      expect(Math.abs(got - want)).toBeLessThanOrEqual(10);
   });
 
   it('refuses a colour that could smuggle filter options', async () => {
-    await expect(
-      generateDemoVideo(join(dir, 'bad.mp4'), { scenes: [{ title: 'x', color: 'red:s=9999x9999', seconds: 1 }] }),
-    ).rejects.toBeInstanceOf(MediaError);
+    await expect(generateDemoVideo(join(dir, 'bad.mp4'), { scenes: [{ title: 'x', color: 'red:s=9999x9999', seconds: 1 }] })).rejects.toBeInstanceOf(
+      MediaError,
+    );
   });
 });

@@ -44,7 +44,7 @@ export async function generateDemoVideo(output: string, options: DemoVideoOption
       parts.push(
         `color=c=${s.color}:s=${width}x${height}:r=${fps}:d=${d},` +
           `drawtext=${font}:textfile=${titleFile}:expansion=none:fontcolor=white:fontsize=${titleSize(s.title)}:` +
-            `box=1:boxcolor=black@0.35:boxborderw=${Math.round(height / 40)}:x=(w-text_w)/2:y=(h-text_h)/2,` +
+          `box=1:boxcolor=black@0.35:boxborderw=${Math.round(height / 40)}:x=(w-text_w)/2:y=(h-text_h)/2,` +
           `drawtext=${font}:textfile=${stepFile}:expansion=none:fontcolor=white@0.85:fontsize=${Math.round(height / 20)}:x=(w-text_w)/2:y=h*0.7` +
           `[v${i}]`,
         `sine=f=${TONES_HZ[i % TONES_HZ.length]}:r=48000:d=${d},volume=0.15[a${i}]`,
@@ -61,10 +61,27 @@ export async function generateDemoVideo(output: string, options: DemoVideoOption
     const command = ffmpegCommand()
       .complexFilter(parts.join(';'))
       .outputOptions([
-        '-hide_banner', '-map', '[v]', '-map', '[a]',
-        '-c:v', 'libx264', '-preset', 'veryfast', '-crf', '23', '-g', String(fps * 2),
-        '-c:a', 'aac', '-b:a', '96k',
-        '-movflags', '+faststart', '-f', 'mp4',
+        '-hide_banner',
+        '-map',
+        '[v]',
+        '-map',
+        '[a]',
+        '-c:v',
+        'libx264',
+        '-preset',
+        'veryfast',
+        '-crf',
+        '23',
+        '-g',
+        String(fps * 2),
+        '-c:a',
+        'aac',
+        '-b:a',
+        '96k',
+        '-movflags',
+        '+faststart',
+        '-f',
+        'mp4',
       ])
       .output(resolve(output));
     await runFfmpeg(command, 'The demo video could not be made', { paths: [work] });

@@ -1,4 +1,6 @@
 import { existsSync } from 'node:fs';
+import { resolve } from 'node:path';
+import { fileURLToPath } from 'node:url';
 import ffmpeg from 'fluent-ffmpeg';
 import { MediaError, shortDetail } from './media-error';
 
@@ -9,23 +11,35 @@ export const FFPROBE_PATH = process.env.FFPROBE_PATH || '/usr/bin/ffprobe';
 ffmpeg.setFfmpegPath(FFMPEG_PATH);
 ffmpeg.setFfprobePath(FFPROBE_PATH);
 
+/**
+ * Media tools run tied to this process's life (`setpriv --pdeathsig KILL`, util-linux, in every
+ * Debian): when the server or worker dies, its ffmpeg and ffprobe die too instead of working on for
+ * nobody. Without setpriv (another system) they run as they are.
+ */
+const SETPRIV = '/usr/bin/setpriv';
+const TETHERED_FFMPEG = fileURLToPath(new URL('./bin/ffmpeg-tethered', import.meta.url));
+const tethered = existsSync(SETPRIV) && existsSync(TETHERED_FFMPEG);
+// the wrapper script reads the real binary from here
+process.env.CARDWRIGHT_FFMPEG = FFMPEG_PATH;
+
+/** The executable and arguments that run `tool args` tied to this process's life. */
+export function tetheredCommand(tool: string, args: readonly string[]): [string, string[]] {
+  return tethered ? [SETPRIV, ['--pdeathsig', 'KILL', '--', tool, ...args]] : [tool, [...args]];
+}
+
 export type FfmpegCommand = ffmpeg.FfmpegCommand;
 
 /** A fluent-ffmpeg command bound to the system ffmpeg, with no input (lavfi graphs) or one input file. */
 export function ffmpegCommand(input?: string): FfmpegCommand {
   const command = input === undefined ? ffmpeg() : ffmpeg(input);
-  return command.setFfmpegPath(FFMPEG_PATH);
+  return command.setFfmpegPath(tethered ? TETHERED_FFMPEG : FFMPEG_PATH);
 }
 
 /**
  * Runs a prepared command; failures become a MediaError whose reason starts with `failure`.
  * `onStderr` sees every stderr line (fluent-ffmpeg splits on CR too, so progress lines arrive one by one).
  */
-export function runFfmpeg(
-  command: FfmpegCommand,
-  failure: string,
-  options: { onStderr?: (line: string) => void; paths?: string[] } = {},
-): Promise<void> {
+export function runFfmpeg(command: FfmpegCommand, failure: string, options: { onStderr?: (line: string) => void; paths?: string[] } = {}): Promise<void> {
   return new Promise((resolve, reject) => {
     if (!existsSync(FFMPEG_PATH)) {
       reject(new MediaError('failed', `ffmpeg is not installed at ${FFMPEG_PATH}`));
@@ -39,6 +53,14 @@ export function runFfmpeg(
     command.on('end', () => resolve());
     command.run();
   });
+}
+
+/** An input that ffmpeg reads over HTTP (a presigned URL of a file in object storage) rather than from this disk. */
+export const isUrl = (input: string) => /^https?:\/\//i.test(input);
+
+/** An input as ffmpeg is given it: a URL as it is, a path made absolute. */
+export function sourceOf(input: string): string {
+  return isUrl(input) ? input : resolve(input);
 }
 
 /** Seconds as ffmpeg reads them, to the microsecond. */

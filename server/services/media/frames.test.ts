@@ -60,9 +60,20 @@ describe('grabSharpest (variance of the Laplacian as a focus measure, a common p
   beforeAll(async () => {
     // testsrc2 is sharp everywhere; a strong box blur covers every frame except 1.40-1.60 s.
     blurry = await ffmpegMake(join(dir, 'blurry.mp4'), [
-      '-f', 'lavfi', '-i', 'testsrc2=s=320x240:r=25:d=3',
-      '-vf', "boxblur=luma_radius=6:luma_power=2:chroma_radius=6:enable='not(between(t,1.39,1.61))'",
-      '-c:v', 'libx264', '-preset', 'ultrafast', '-pix_fmt', 'yuv420p', '-g', '250',
+      '-f',
+      'lavfi',
+      '-i',
+      'testsrc2=s=320x240:r=25:d=3',
+      '-vf',
+      "boxblur=luma_radius=6:luma_power=2:chroma_radius=6:enable='not(between(t,1.39,1.61))'",
+      '-c:v',
+      'libx264',
+      '-preset',
+      'ultrafast',
+      '-pix_fmt',
+      'yuv420p',
+      '-g',
+      '250',
     ]);
   });
 
@@ -85,6 +96,14 @@ describe('grabSharpest (variance of the Laplacian as a focus measure, a common p
     const again = join(dir, 'again.jpg');
     await grabFrame(blurry, still.atMs, again);
     expect((await readFile(again)).equals(await readFile(out))).toBe(true);
+  });
+
+  it('looks only inside the bounds it is given (a chapter starting at 1.7 s never takes the sharp frames of the one before)', async () => {
+    const free = await grabSharpest(blurry, 1700, join(dir, 'free.jpg'));
+    expect(free.atMs).toBeLessThan(1650);
+    const inside = await grabSharpest(blurry, 1700, join(dir, 'inside.jpg'), { within: { fromMs: 1700, toMs: 3000 } });
+    expect(inside.atMs).toBeGreaterThanOrEqual(1700);
+    expect(inside.atMs).toBeLessThan(3000);
   });
 
   it('keeps the window inside the video near its start and end', async () => {

@@ -2,7 +2,7 @@ import { readFile, unlink } from 'node:fs/promises';
 import { resolve } from 'node:path';
 import { Writable } from 'node:stream';
 import { formatTimestamp } from '@shared/transcript/timestamp';
-import { even, ffmpegCommand, runFfmpeg, seconds } from './ffmpeg';
+import { even, ffmpegCommand, runFfmpeg, seconds, sourceOf } from './ffmpeg';
 import { readJpegSize } from './jpeg-size';
 import { MediaError } from './media-error';
 import { probe } from './probe';
@@ -15,7 +15,7 @@ import { laplacianVariance } from './sharpness';
  */
 export async function grabFrame(input: string, atMs: number, output: string): Promise<{ width: number; height: number }> {
   if (!Number.isFinite(atMs) || atMs < 0) throw new MediaError('bad-input', 'A still needs a time of 0:00 or later');
-  const source = resolve(input);
+  const source = sourceOf(input);
   const target = resolve(output);
   // ffmpeg writes nothing when the time is past the end; a file left from before must not pass for it.
   await unlink(target).catch(() => undefined);
@@ -32,7 +32,8 @@ export async function grabFrame(input: string, atMs: number, output: string): Pr
   return size;
 }
 
-export type SharpestOptions = { windowMs?: number };
+/** `within`: frames outside these times are never looked at (a chapter's start and the next chapter's). */
+export type SharpestOptions = { windowMs?: number; within?: { fromMs: number; toMs: number } };
 export type SharpestStill = { atMs: number; score: number; width: number; height: number };
 
 /** Frames whose scores are this close to the best count as equally sharp; the nearest one wins. */
@@ -46,21 +47,18 @@ const SCORE_WIDTH = 320;
  * score the one nearest `atMs` is kept. `atMs` in the result is a whole millisecond that grabFrame
  * maps back to the same frame.
  */
-export async function grabSharpest(
-  input: string,
-  atMs: number,
-  output: string,
-  { windowMs = 1000 }: SharpestOptions = {},
-): Promise<SharpestStill> {
+export async function grabSharpest(input: string, atMs: number, output: string, { windowMs = 1000, within }: SharpestOptions = {}): Promise<SharpestStill> {
   if (!Number.isFinite(atMs) || atMs < 0) throw new MediaError('bad-input', 'A still needs a time of 0:00 or later');
-  const source = resolve(input);
+  const source = sourceOf(input);
   const info = await probe(source);
   const frameMs = info.frameRate > 0 ? 1000 / info.frameRate : 40;
   // The last frame starts one frame before the end; asking for later finds nothing.
   const lastMs = Math.max(0, info.durationMs - frameMs);
-  const center = Math.min(atMs, lastMs);
-  const fromMs = Math.max(0, center - Math.max(0, windowMs));
-  const toMs = Math.min(info.durationMs, center + Math.max(0, windowMs));
+  const lo = within ? Math.max(0, within.fromMs) : 0;
+  const hi = within ? Math.min(info.durationMs, within.toMs) : info.durationMs;
+  const center = Math.max(lo, Math.min(atMs, lastMs, hi));
+  const fromMs = Math.max(lo, center - Math.max(0, windowMs));
+  const toMs = Math.max(fromMs + frameMs, Math.min(hi, center + Math.max(0, windowMs)));
 
   const width = Math.min(SCORE_WIDTH, even(info.width));
   const height = even(Math.round((width * info.height) / info.width));
@@ -94,11 +92,17 @@ export async function grabSharpest(
     // -t on the input side trims before the filters, so showinfo sees exactly the frames piped out.
     .inputOptions(['-hide_banner', '-ss', seconds(fromMs), '-t', seconds(Math.max(frameMs, toMs - fromMs))])
     .outputOptions([
-      '-map', '0:v:0', '-an', '-sn',
+      '-map',
+      '0:v:0',
+      '-an',
+      '-sn',
       // One output frame per decoded frame, so frame i of the pipe is showinfo line i.
-      '-fps_mode', 'passthrough',
-      '-vf', `scale=${width}:${height}:flags=area,format=gray,showinfo`,
-      '-f', 'rawvideo',
+      '-fps_mode',
+      'passthrough',
+      '-vf',
+      `scale=${width}:${height}:flags=area,format=gray,showinfo`,
+      '-f',
+      'rawvideo',
     ])
     .output(sink, { end: true });
   await runFfmpeg(command, `The frames near ${formatTimestamp(center)} could not be read`, {

@@ -3,7 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { readJpegSize } from './jpeg-size';
 
 const picture = (progressive: boolean) =>
-  sharp({ create: { width: 37, height: 23, channels: 3, background: '#A87B4F' } }).jpeg({ progressive }).toBuffer();
+  sharp({ create: { width: 37, height: 23, channels: 3, background: '#A87B4F' } })
+    .jpeg({ progressive })
+    .toBuffer();
 
 describe('readJpegSize (ITU-T T.81 markers), checked against sharp/libvips metadata', () => {
   it('reads baseline (SOF0) and progressive (SOF2) JPEGs', async () => {
@@ -15,7 +17,13 @@ describe('readJpegSize (ITU-T T.81 markers), checked against sharp/libvips metad
   });
 
   it('returns null for other files and for a JPEG cut before its frame header', async () => {
-    expect(readJpegSize(await sharp({ create: { width: 4, height: 4, channels: 3, background: 'red' } }).png().toBuffer())).toBeNull();
+    expect(
+      readJpegSize(
+        await sharp({ create: { width: 4, height: 4, channels: 3, background: 'red' } })
+          .png()
+          .toBuffer(),
+      ),
+    ).toBeNull();
     expect(readJpegSize((await picture(false)).subarray(0, 6))).toBeNull();
     expect(readJpegSize(new Uint8Array())).toBeNull();
   });

@@ -14,8 +14,23 @@ afterAll(() => rm(dir, { recursive: true, force: true }));
 describe('makePreview (H.264 + AAC, at most 720 px tall, moov before mdat)', () => {
   it('scales a 1280x960 recording to 960x720 H.264/yuv420p with AAC and faststart, reporting progress', async () => {
     const source = await ffmpegMake(join(dir, 'big.mp4'), [
-      '-f', 'lavfi', '-i', 'testsrc2=s=1280x960:r=25:d=2', '-f', 'lavfi', '-i', 'sine=f=330:r=48000:d=2',
-      '-c:v', 'libx264', '-preset', 'ultrafast', '-pix_fmt', 'yuv420p', '-c:a', 'aac', '-shortest',
+      '-f',
+      'lavfi',
+      '-i',
+      'testsrc2=s=1280x960:r=25:d=2',
+      '-f',
+      'lavfi',
+      '-i',
+      'sine=f=330:r=48000:d=2',
+      '-c:v',
+      'libx264',
+      '-preset',
+      'ultrafast',
+      '-pix_fmt',
+      'yuv420p',
+      '-c:a',
+      'aac',
+      '-shortest',
     ]);
     const out = join(dir, 'preview.mp4');
     const progress: number[] = [];
@@ -40,7 +55,16 @@ describe('makePreview (H.264 + AAC, at most 720 px tall, moov before mdat)', () 
 
   it('never upscales, rounds odd sizes to even, and copes with no sound', async () => {
     const source = await ffmpegMake(join(dir, 'odd.mkv'), [
-      '-f', 'lavfi', '-i', 'testsrc2=s=321x241:r=25:d=0.5', '-c:v', 'libx264', '-preset', 'ultrafast', '-pix_fmt', 'yuv444p',
+      '-f',
+      'lavfi',
+      '-i',
+      'testsrc2=s=321x241:r=25:d=0.5',
+      '-c:v',
+      'libx264',
+      '-preset',
+      'ultrafast',
+      '-pix_fmt',
+      'yuv444p',
     ]);
     const out = join(dir, 'odd-preview.mp4');
     await makePreview(source, out);

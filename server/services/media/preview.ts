@@ -1,7 +1,7 @@
 import { randomBytes } from 'node:crypto';
 import { readFile, rename, unlink } from 'node:fs/promises';
 import { basename, dirname, join, resolve } from 'node:path';
-import { ffmpegCommand, runFfmpeg, seconds } from './ffmpeg';
+import { ffmpegCommand, runFfmpeg, seconds, sourceOf } from './ffmpeg';
 import { readJpegSize } from './jpeg-size';
 import { MediaError } from './media-error';
 import { probe } from './probe';
@@ -28,7 +28,7 @@ export type PreviewOptions = {
  * Progress stops at ffmpeg's last report (about 100); the caller marks the job done when this resolves.
  */
 export async function makePreview(input: string, output: string, options: PreviewOptions = {}): Promise<void> {
-  const source = resolve(input);
+  const source = sourceOf(input);
   const target = resolve(output);
   const info = await probe(source);
   const durationMs = options.durationMs && options.durationMs > 0 ? options.durationMs : info.durationMs;
@@ -38,17 +38,41 @@ export async function makePreview(input: string, output: string, options: Previe
   const command = ffmpegCommand(source)
     .inputOptions(['-hide_banner'])
     .outputOptions([
-      '-map', '0:v:0', '-map', '0:a:0?', '-sn', '-dn',
-      '-vf', filters,
+      '-map',
+      '0:v:0',
+      '-map',
+      '0:a:0?',
+      '-sn',
+      '-dn',
+      '-vf',
+      filters,
       // Keep the source's timestamps: phone recordings are often variable-rate and some report odd
       // nominal rates (90000 fps) that a constant-rate output would fill with duplicates.
-      '-fps_mode', 'vfr',
-      '-c:v', 'libx264', '-preset', 'veryfast', '-crf', '26', '-pix_fmt', 'yuv420p', '-profile:v', 'high',
-      '-c:a', 'aac', '-b:a', '128k', '-ac', '2',
-      '-movflags', '+faststart',
+      '-fps_mode',
+      'vfr',
+      '-c:v',
+      'libx264',
+      '-preset',
+      'veryfast',
+      '-crf',
+      '26',
+      '-pix_fmt',
+      'yuv420p',
+      '-profile:v',
+      'high',
+      '-c:a',
+      'aac',
+      '-b:a',
+      '128k',
+      '-ac',
+      '2',
+      '-movflags',
+      '+faststart',
       // Sparse or late audio packets otherwise overflow the muxing queue on some phone files.
-      '-max_muxing_queue_size', '1024',
-      '-f', 'mp4',
+      '-max_muxing_queue_size',
+      '1024',
+      '-f',
+      'mp4',
     ])
     .output(partial);
 
@@ -80,12 +104,8 @@ export async function makePreview(input: string, output: string, options: Previe
  * duration but not before 1 s (recordings often open on a fade or a hand over the lens), and for a
  * clip shorter than 2 s at its middle. Returns where it was taken and its size.
  */
-export async function makePoster(
-  input: string,
-  output: string,
-  atMs?: number,
-): Promise<{ atMs: number; width: number; height: number }> {
-  const source = resolve(input);
+export async function makePoster(input: string, output: string, atMs?: number): Promise<{ atMs: number; width: number; height: number }> {
+  const source = sourceOf(input);
   const target = resolve(output);
   const info = await probe(source);
   const frameMs = info.frameRate > 0 ? 1000 / info.frameRate : 40;

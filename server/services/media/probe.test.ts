@@ -16,14 +16,32 @@ beforeAll(async () => {
   dir = await tempDir();
   // 2 s of 320x240 at 25 fps with a 440 Hz tone: the values probe() must give back.
   clip = await ffmpegMake(join(dir, 'clip.mp4'), [
-    '-f', 'lavfi', '-i', 'testsrc2=s=320x240:r=25:d=2', '-f', 'lavfi', '-i', 'sine=f=440:r=48000:d=2',
-    '-c:v', 'libx264', '-preset', 'ultrafast', '-pix_fmt', 'yuv420p', '-c:a', 'aac', '-shortest',
+    '-f',
+    'lavfi',
+    '-i',
+    'testsrc2=s=320x240:r=25:d=2',
+    '-f',
+    'lavfi',
+    '-i',
+    'sine=f=440:r=48000:d=2',
+    '-c:v',
+    'libx264',
+    '-preset',
+    'ultrafast',
+    '-pix_fmt',
+    'yuv420p',
+    '-c:a',
+    'aac',
+    '-shortest',
   ]);
 });
 afterAll(() => rm(dir, { recursive: true, force: true }));
 
 async function refused(path: string): Promise<MediaError> {
-  const e = await probe(path).then(() => null, (err: unknown) => err);
+  const e = await probe(path).then(
+    () => null,
+    (err: unknown) => err,
+  );
   expect(e).toBeInstanceOf(MediaError);
   return e as MediaError;
 }
@@ -39,7 +57,16 @@ describe('probe (values as made by ffmpeg lavfi; ffprobe JSON output)', () => {
   });
 
   it('a silent clip has no audio codec', async () => {
-    const silent = await ffmpegMake(join(dir, 'silent.mkv'), ['-f', 'lavfi', '-i', 'testsrc2=s=160x90:r=30000/1001:d=1', '-c:v', 'libx264', '-preset', 'ultrafast']);
+    const silent = await ffmpegMake(join(dir, 'silent.mkv'), [
+      '-f',
+      'lavfi',
+      '-i',
+      'testsrc2=s=160x90:r=30000/1001:d=1',
+      '-c:v',
+      'libx264',
+      '-preset',
+      'ultrafast',
+    ]);
     expect(await probe(silent)).toMatchObject({ hasAudio: false, audioCodec: null, width: 160, height: 90, frameRate: 29.97, formatName: 'matroska,webm' });
   });
 
@@ -76,7 +103,9 @@ describe('probe (values as made by ffmpeg lavfi; ffprobe JSON output)', () => {
     expect((await refused(join(dir, 'nothing-here.mp4'))).reason).toBe('This file could not be read as a video: the file was not found');
 
     const png = join(dir, 'photo.mp4');
-    await sharp({ create: { width: 8, height: 8, channels: 3, background: '#6E8B74' } }).png().toFile(png);
+    await sharp({ create: { width: 8, height: 8, channels: 3, background: '#6E8B74' } })
+      .png()
+      .toFile(png);
     expect((await refused(png)).code).toBe('not-a-video');
 
     const sound = await ffmpegMake(join(dir, 'tone.m4a'), ['-f', 'lavfi', '-i', 'sine=d=1', '-c:a', 'aac']);

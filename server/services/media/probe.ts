@@ -1,6 +1,6 @@
 import { execFile } from 'node:child_process';
 import { stat } from 'node:fs/promises';
-import { FFPROBE_PATH, ffmpegCommand, runFfmpeg } from './ffmpeg';
+import { FFPROBE_PATH, ffmpegCommand, isUrl, runFfmpeg, tetheredCommand } from './ffmpeg';
 import { MediaError, shortDetail } from './media-error';
 
 /** What the footage is. Width and height are as displayed, after any rotation a phone recorded. */
@@ -41,10 +41,13 @@ const STILL_FORMATS = /(^|,)(image2|[a-z0-9]+_pipe|tty|apng|gif)(,|$)/;
  * when the file is missing, is not a video ffprobe can read, or holds no video stream.
  */
 export async function probe(path: string): Promise<MediaInfo> {
-  const size = await stat(path).then(
-    (s) => (s.isFile() ? s.size : null),
-    () => null,
-  );
+  // A file in object storage is read through its URL; ffprobe's answer says its size.
+  const size = isUrl(path)
+    ? -1
+    : await stat(path).then(
+        (s) => (s.isFile() ? s.size : null),
+        () => null,
+      );
   if (size === null) throw new MediaError('unreadable', `${UNREADABLE}: the file was not found`);
   if (size === 0) throw new MediaError('unreadable', `${UNREADABLE}: the file is empty`);
 
@@ -64,8 +67,7 @@ export async function probe(path: string): Promise<MediaInfo> {
 
   const quarterTurn = Math.abs(rotation(video)) % 180 === 90;
   const frameRate = rate(video.avg_frame_rate) ?? rate(video.r_frame_rate) ?? 0;
-  const durationMs =
-    seconds(data.format?.duration) ?? seconds(video.duration) ?? (await demuxDurationMs(path, frameRate));
+  const durationMs = seconds(data.format?.duration) ?? seconds(video.duration) ?? (await demuxDurationMs(path, frameRate));
 
   return {
     durationMs,
@@ -75,7 +77,7 @@ export async function probe(path: string): Promise<MediaInfo> {
     videoCodec: video.codec_name ?? 'unknown',
     audioCodec: audio?.codec_name ?? null,
     hasAudio: Boolean(audio),
-    sizeBytes: Number(data.format?.size) || size,
+    sizeBytes: Number(data.format?.size) || Math.max(0, size),
     formatName,
   };
 }
@@ -84,7 +86,7 @@ function runProbe(path: string): Promise<ProbeOutput> {
   // -v error rather than quiet: on failure the one error line is the reason we pass on.
   const args = ['-v', 'error', '-print_format', 'json', '-show_format', '-show_streams', path];
   return new Promise((resolve, reject) => {
-    execFile(FFPROBE_PATH, args, { maxBuffer: 16 * 1024 * 1024, timeout: 60_000 }, (err, stdout, stderr) => {
+    execFile(...tetheredCommand(FFPROBE_PATH, args), { maxBuffer: 16 * 1024 * 1024, timeout: 60_000 }, (err, stdout, stderr) => {
       if (err) {
         const detail = (err as NodeJS.ErrnoException).code === 'ENOENT' ? `ffprobe is not installed at ${FFPROBE_PATH}` : shortDetail(stderr, [path]);
         reject(new MediaError('unreadable', `${UNREADABLE}: ${detail}`, { detail, cause: err }));
@@ -105,9 +107,7 @@ function runProbe(path: string): Promise<ProbeOutput> {
  */
 async function demuxDurationMs(path: string, frameRate: number): Promise<number> {
   let lastMs = -1;
-  const command = ffmpegCommand(path)
-    .outputOptions(['-map', '0:v:0', '-c', 'copy', '-f', 'null'])
-    .output('-');
+  const command = ffmpegCommand(path).outputOptions(['-map', '0:v:0', '-c', 'copy', '-f', 'null']).output('-');
   await runFfmpeg(command, UNREADABLE, {
     paths: [path],
     onStderr: (line) => {

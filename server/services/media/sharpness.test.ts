@@ -9,10 +9,7 @@ const math = create(all);
 function mathjsLaplacianVariance(gray: Uint8Array, w: number, h: number): number {
   const m = Array.from({ length: h }, (_, r) => Array.from(gray.subarray(r * w, r * w + w)));
   const at = (r0: number, c0: number) => math.subset(m, math.index(math.range(r0, r0 + h - 2), math.range(c0, c0 + w - 2))) as number[][];
-  const lap = math.subtract(
-    math.multiply(4, at(1, 1)),
-    math.add(math.add(at(0, 1), at(2, 1)), math.add(at(1, 0), at(1, 2))),
-  ) as number[][];
+  const lap = math.subtract(math.multiply(4, at(1, 1)), math.add(math.add(at(0, 1), at(2, 1)), math.add(at(1, 0), at(1, 2)))) as number[][];
   return math.variance(lap.flat(), 'uncorrected') as unknown as number;
 }
 
@@ -45,7 +42,10 @@ describe('laplacianVariance', () => {
     const w = 64;
     const h = 48;
     const g = noise(w, h, 3);
-    const blurred = await sharp(Buffer.from(g), { raw: { width: w, height: h, channels: 1 } }).blur(2).raw().toBuffer();
+    const blurred = await sharp(Buffer.from(g), { raw: { width: w, height: h, channels: 1 } })
+      .blur(2)
+      .raw()
+      .toBuffer();
     expect(laplacianVariance(new Uint8Array(blurred), w, h)).toBeLessThan(laplacianVariance(g, w, h) / 10);
   });
 });

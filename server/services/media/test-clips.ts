@@ -44,8 +44,18 @@ export function colourSteps(dir: string): Promise<string> {
   const sources = STEPS.map((s, i) => `color=c=${s.name}:s=160x120:r=25:d=1[c${i}]`).join(';');
   const inputs = STEPS.map((_, i) => `[c${i}]`).join('');
   return ffmpegMake(join(dir, 'steps.mp4'), [
-    '-filter_complex', `${sources};${inputs}concat=n=${STEPS.length}:v=1:a=0[v]`,
-    '-map', '[v]', '-c:v', 'libx264', '-preset', 'ultrafast', '-g', '1000', '-pix_fmt', 'yuv420p',
+    '-filter_complex',
+    `${sources};${inputs}concat=n=${STEPS.length}:v=1:a=0[v]`,
+    '-map',
+    '[v]',
+    '-c:v',
+    'libx264',
+    '-preset',
+    'ultrafast',
+    '-g',
+    '1000',
+    '-pix_fmt',
+    'yuv420p',
   ]);
 }
 

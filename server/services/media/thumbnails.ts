@@ -1,7 +1,7 @@
 import { existsSync } from 'node:fs';
 import { mkdir, readdir, unlink } from 'node:fs/promises';
 import { join, resolve } from 'node:path';
-import { even, ffmpegCommand, runFfmpeg } from './ffmpeg';
+import { even, ffmpegCommand, runFfmpeg, sourceOf } from './ffmpeg';
 import { MediaError } from './media-error';
 import { probe } from './probe';
 
@@ -40,7 +40,7 @@ export async function makeThumbnails(input: string, outputDir: string, options: 
   if (options.count !== undefined && options.everyMs !== undefined) {
     throw new MediaError('bad-input', 'Ask for a number of thumbnails or a spacing between them, not both');
   }
-  const source = resolve(input);
+  const source = sourceOf(input);
   const dir = resolve(outputDir);
   const info = await probe(source);
 
@@ -75,14 +75,23 @@ export async function makeThumbnails(input: string, outputDir: string, options: 
   const command = ffmpegCommand(source)
     .inputOptions(['-hide_banner'])
     .outputOptions([
-      '-map', '0:v:0', '-an', '-sn', '-fps_mode', 'passthrough',
-      '-vf', [
+      '-map',
+      '0:v:0',
+      '-an',
+      '-sn',
+      '-fps_mode',
+      'passthrough',
+      '-vf',
+      [
         `fps=fps=1000/${intervalMs}:start_time=0:round=up`,
         `select='lt(n,${count})'`,
         `scale=${tileWidth}:${tileHeight}:flags=area`,
         `tile=${columns}x${rows}`,
       ].join(','),
-      '-q:v', '5', '-f', 'image2',
+      '-q:v',
+      '5',
+      '-f',
+      'image2',
     ])
     .output(join(dir, 'thumbs-%03d.jpg'));
   await runFfmpeg(command, 'The thumbnails could not be made', { paths: [source, dir] });

@@ -51,7 +51,15 @@ describe('blogHtml', () => {
       type: 'doc',
       content: [
         { type: 'still', attrs: { stillId: 's2', src: '/media/s2.jpg', alt: '', caption: '', width: null, height: null } },
-        { type: 'step', attrs: { atMs: null, chapterId: null }, content: [{ type: 'stepTitle', content: [] }, { type: 'paragraph', content: [{ type: 'text', text: 'Fold it.' }] }, { type: 'tip', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Crease hard.' }] }] }] },
+        {
+          type: 'step',
+          attrs: { atMs: null, chapterId: null },
+          content: [
+            { type: 'stepTitle', content: [] },
+            { type: 'paragraph', content: [{ type: 'text', text: 'Fold it.' }] },
+            { type: 'tip', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Crease hard.' }] }] },
+          ],
+        },
         { type: 'tip', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Use a bone folder.' }] }] },
         // One of our stills that no longer exists: left out rather than shown broken.
         { type: 'still', attrs: { stillId: 'gone', src: '/media/gone.jpg', alt: 'x', caption: '', width: null, height: null } },
@@ -138,7 +146,10 @@ describe('blogHtml', () => {
   it('lists the supplies with rel="sponsored noopener" on sponsored links, the code, and the disclosure before them', async () => {
     const { html } = await blogHtml(bundle, { imageBase: 'images/' });
     expect(html).toContain('<a href="https://papershop.example/kraft-80" rel="sponsored noopener">Kraft cardstock, 80 lb</a>');
+    // The tag beside the item, not only the disclosure above the list (FTC Endorsement Guides, 16 CFR 255).
+    expect(html).toContain('Kraft cardstock, 80 lb</a> <span class="cw-sponsored">(sponsored link)</span>');
     expect(html).toContain('<a href="https://papershop.example/floral">Floral patterned paper</a>');
+    expect(html).not.toContain('Floral patterned paper</a> <span class="cw-sponsored">');
     expect(html).toContain('HATBOX10');
     const disclosure = html.indexOf('Papershop sent me the kraft cardstock');
     expect(disclosure).toBeGreaterThan(0);
@@ -169,7 +180,13 @@ describe('blogHtml', () => {
       ['HowToTool', 'Scoring board'],
     ]);
     expect(ld.step).toHaveLength(4);
-    expect(ld.step[0]).toMatchObject({ '@type': 'HowToStep', position: 1, name: 'Cut the pieces', image: 'images/round-hatbox-s1.jpg', url: 'https://cardwright.example/t/round-hatbox#step-1' });
+    expect(ld.step[0]).toMatchObject({
+      '@type': 'HowToStep',
+      position: 1,
+      name: 'Cut the pieces',
+      image: 'images/round-hatbox-s1.jpg',
+      url: 'https://cardwright.example/t/round-hatbox#step-1',
+    });
     expect(ld.step[0].text).toContain('craft knife on a cutting mat');
     expect(ld.step[3].image).toBeUndefined();
     // Every step url points at an id the page has.
@@ -197,7 +214,14 @@ describe('blogZip', () => {
     await run('unzip', ['-tq', file]);
     const { stdout } = await run('unzip', ['-Z1', file]);
     const names = stdout.trim().split('\n').sort();
-    expect(names).toEqual(['images/round-hatbox-s1-600.jpg', 'images/round-hatbox-s1.jpg', 'images/round-hatbox-s2-600.jpg', 'images/round-hatbox-s2.jpg', 'images/round-hatbox-s3.jpg', 'index.html']);
+    expect(names).toEqual([
+      'images/round-hatbox-s1-600.jpg',
+      'images/round-hatbox-s1.jpg',
+      'images/round-hatbox-s2-600.jpg',
+      'images/round-hatbox-s2.jpg',
+      'images/round-hatbox-s3.jpg',
+      'index.html',
+    ]);
     const { stdout: index } = await run('unzip', ['-p', file, 'index.html'], { maxBuffer: 10_000_000 });
     for (const t of imgs(index)) expect(names).toContain(t.src);
     const { stdout: jpeg } = await run('unzip', ['-p', file, 'images/round-hatbox-s1.jpg'], { encoding: 'buffer', maxBuffer: 10_000_000 });

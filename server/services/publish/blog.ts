@@ -8,10 +8,12 @@ import type { JSONContent } from '@tiptap/core';
 import type { Archiver, ZipOptions } from 'archiver';
 import { escapeHtml, renderDocHtml } from '@shared/editor/render-html';
 import { plainText } from '@shared/editor/render-parts';
+import { palette } from '@shared/palette';
 import { blocksText, docSteps, introText, stillsIn } from './doc-parts';
 import { blogVariants, imageSize, renderBlogImage, type BlogImage } from './images';
 import { toRenderPieces, toRenderSupplies } from './render-inputs';
 import type { PublishBundle, PublishStill } from './types';
+import { endSentence } from '@shared/sentence';
 
 export interface BlogOptions {
   /** Prefix of image addresses in the HTML: "images/" in the zip, the media URL prefix for the clipboard. */
@@ -169,7 +171,7 @@ async function collectImages(bundle: PublishBundle): Promise<Map<string, BlogIma
 function howTo(bundle: PublishBundle, images: Map<string, BlogImage>, imageBase: string): Record<string, unknown> {
   const { tutorial } = bundle;
   const url = (name: string) => `${imageBase}${name}`;
-  const description = introText(bundle.doc) || `${tutorial.title}: a step-by-step paper craft tutorial by ${tutorial.authorName}.`;
+  const description = introText(bundle.doc) || endSentence(`${tutorial.title}: a step-by-step paper craft tutorial by ${tutorial.authorName}`);
   const cover = bundle.stills[0] ? images.get(bundle.stills[0].id) : undefined;
   const isTool = (c: string) => c.trim().toLowerCase() === 'tool';
   const quantity = (q: string) => (q.trim() ? { requiredQuantity: q.trim() } : {});
@@ -202,14 +204,15 @@ function howTo(bundle: PublishBundle, images: Map<string, BlogImage>, imageBase:
   return ld;
 }
 
+const c = palette;
 const PAGE_STYLE = [
-  'body{margin:0;background:#FBF8F3;color:#22303C;font:17px/1.6 Merriweather,Georgia,serif}',
+  `body{margin:0;background:${c.paper};color:${c.ink};font:17px/1.6 Merriweather,Georgia,serif}`,
   'article{max-width:44rem;margin:0 auto;padding:2rem 1rem}',
   'img{max-width:100%;height:auto}',
-  'figure{margin:1rem 0}figcaption,.cw-byline,.cw-note,.cw-mm,.cw-step-time{color:#8A8F98;font-size:.85em}',
-  'table{border-collapse:collapse;width:100%;font-size:.9em}th,td{border-bottom:1px solid #d9d2c7;padding:.3rem .4rem;text-align:left;vertical-align:top}',
-  'aside{border-left:3px solid #6E8B74;padding:.2rem 1rem;margin:1rem 0}aside.cw-caution{border-color:#B5475B}',
-  '.cw-disclosure{font-style:italic}a{color:#7a5530}',
+  `figure{margin:1rem 0}figcaption,.cw-byline,.cw-note,.cw-mm,.cw-step-time,.cw-sponsored{color:${c.pencil};font-size:.85em}`,
+  `table{border-collapse:collapse;width:100%;font-size:.9em}th,td{border-bottom:1px solid ${c.rule};padding:.3rem .4rem;text-align:left;vertical-align:top}`,
+  `aside{border-left:3px solid ${c.sage};padding:.2rem 1rem;margin:1rem 0}aside.cw-caution{border-color:${c.rosehip}}`,
+  `.cw-disclosure{font-style:italic}a{color:${c.kraftDeep}}`,
 ].join('');
 
 /**
@@ -246,7 +249,10 @@ export async function blogHtml(bundle: PublishBundle, options: BlogOptions): Pro
     const label = `${kind === 'tip' ? 'Tip' : 'Caution'} ${++counts[kind]}`;
     return `<aside class="cw-${kind}" aria-label="${label}">`;
   });
-  const byline = [tutorial.authorName, tutorial.studioName].map((s) => s.trim()).filter(Boolean).join(', ');
+  const byline = [tutorial.authorName, tutorial.studioName]
+    .map((s) => s.trim())
+    .filter(Boolean)
+    .join(', ');
   const html =
     `<article class="cw-tutorial"><h1>${escapeHtml(tutorial.title)}</h1>` +
     (byline ? `<p class="cw-byline">By ${escapeHtml(byline)}</p>` : '') +
@@ -268,7 +274,13 @@ function inOrder<T>(tasks: readonly (() => Promise<T>)[], limit: number): Promis
   const results: Promise<T>[] = [];
   for (let i = 0; i < tasks.length; i++) {
     // Task i waits for task i - limit, so no more than `limit` run at once.
-    const gate = i >= limit ? results[i - limit]!.then(() => undefined, () => undefined) : Promise.resolve();
+    const gate =
+      i >= limit
+        ? results[i - limit]!.then(
+            () => undefined,
+            () => undefined,
+          )
+        : Promise.resolve();
     const p = gate.then(tasks[i]!);
     // Failures are reported by whoever awaits them; this only keeps an abandoned one from being "unhandled".
     p.catch(() => undefined);
@@ -294,7 +306,10 @@ export async function blogZip(bundle: PublishBundle, out: NodeJS.WritableStream,
   archive.pipe(out);
   archive.append(result.page, { name: 'index.html' });
   // Two at a time: sharp already uses several threads per image, and the machine has two cores.
-  const files = inOrder(result.images.map((image) => () => renderBlogImage(image)), 2);
+  const files = inOrder(
+    result.images.map((image) => () => renderBlogImage(image)),
+    2,
+  );
   try {
     for (const pending of files) {
       // JPEG does not deflate further: store the images as they are.

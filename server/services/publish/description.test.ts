@@ -4,11 +4,26 @@ import { hatboxDoc, hatboxPieces } from './test-fixtures';
 import type { PublishBundle } from './types';
 
 const bundle: PublishBundle = {
-  tutorial: { title: 'Round hatbox', slug: 'round-hatbox', studioName: 'Paper Lantern Studio', authorName: 'Robin Ash', publicUrl: 'https://cardwright.example/t/round-hatbox', videoUrl: null },
+  tutorial: {
+    title: 'Round hatbox',
+    slug: 'round-hatbox',
+    studioName: 'Paper Lantern Studio',
+    authorName: 'Robin Ash',
+    publicUrl: 'https://cardwright.example/t/round-hatbox',
+    videoUrl: null,
+  },
   doc: hatboxDoc(),
   pieces: hatboxPieces(),
   supplies: [
-    { category: 'cardstock', name: 'Kraft cardstock, 80 lb', quantity: '3 sheets', note: '', url: 'https://papershop.example/kraft-80', sponsored: true, discountCode: 'HATBOX10' },
+    {
+      category: 'cardstock',
+      name: 'Kraft cardstock, 80 lb',
+      quantity: '3 sheets',
+      note: '',
+      url: 'https://papershop.example/kraft-80',
+      sponsored: true,
+      discountCode: 'HATBOX10',
+    },
     { category: 'tool', name: 'Craft knife', quantity: '', note: '', url: null, sponsored: false, discountCode: null },
   ],
   disclosure: 'Papershop sent me the kraft cardstock; the link to it is sponsored.',
@@ -31,7 +46,12 @@ describe('videoDescription', () => {
   });
 
   it('keeps a first chapter that already starts at 0:00', () => {
-    expect(chapterLines([{ title: 'Welcome', startMs: 0 }, { title: 'Cutting', startMs: 42_000 }])).toEqual(['0:00 Welcome', '0:42 Cutting']);
+    expect(
+      chapterLines([
+        { title: 'Welcome', startMs: 0 },
+        { title: 'Cutting', startMs: 42_000 },
+      ]),
+    ).toEqual(['0:00 Welcome', '0:42 Cutting']);
     // Times show to the whole second (rounded down), so 0.4 s is already 0:00.
     expect(chapterLines([{ title: 'Welcome', startMs: 400 }])).toEqual(['0:00 Welcome']);
   });
@@ -39,7 +59,7 @@ describe('videoDescription', () => {
   it('opens with the intro, then lists supplies with links and codes, the disclosure and the written tutorial', () => {
     const text = videoDescription(bundle);
     expect(text.split('\n')[0]).toBe('A sturdy round hatbox from two sheets of kraft cardstock, with a patterned lid topper and a matching tag.');
-    expect(text).toContain('- Kraft cardstock, 80 lb (3 sheets): https://papershop.example/kraft-80 (discount code HATBOX10)');
+    expect(text).toContain('- Kraft cardstock, 80 lb (sponsored link) (3 sheets): https://papershop.example/kraft-80 (discount code HATBOX10)');
     expect(text).toContain('- Craft knife\n');
     expect(text).toContain('Papershop sent me the kraft cardstock; the link to it is sponsored.');
     expect(text.indexOf('Papershop sent me')).toBeLessThan(text.indexOf('https://papershop.example/kraft-80'));
@@ -48,7 +68,26 @@ describe('videoDescription', () => {
   });
 
   it('leaves out what the tutorial does not have', () => {
-    const bare = videoDescription({ ...bundle, doc: { type: 'doc', content: [] }, chapters: [], supplies: [], disclosure: null, tutorial: { ...bundle.tutorial, publicUrl: null } });
+    const bare = videoDescription({
+      ...bundle,
+      doc: { type: 'doc', content: [] },
+      chapters: [],
+      supplies: [],
+      disclosure: null,
+      tutorial: { ...bundle.tutorial, publicUrl: null },
+    });
     expect(bare).toBe('Round hatbox: a step-by-step paper craft tutorial by Robin Ash.\n');
+  });
+
+  it('ends on one full stop when the name already ends with one', () => {
+    const bare = videoDescription({
+      ...bundle,
+      doc: { type: 'doc', content: [] },
+      chapters: [],
+      supplies: [],
+      disclosure: null,
+      tutorial: { ...bundle.tutorial, publicUrl: null, authorName: 'Robin Ash Jr.' },
+    });
+    expect(bare).toBe('Round hatbox: a step-by-step paper craft tutorial by Robin Ash Jr.\n');
   });
 });

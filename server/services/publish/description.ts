@@ -2,11 +2,12 @@
  * The video description (P4): plain text for the video page, with the chapter list, the
  * supplies and their links, the disclosure and the link to the written tutorial.
  */
-import { groupSupplies, supplyDetails } from '@shared/editor/render-parts';
+import { groupSupplies, sponsoredTag, supplyDetails } from '@shared/editor/render-parts';
 import { formatTimestamp } from '@shared/transcript/timestamp';
 import { introText } from './doc-parts';
 import { toRenderSupplies } from './render-inputs';
 import type { PublishBundle } from './types';
+import { endSentence } from '@shared/sentence';
 
 /**
  * Chapter lines "m:ss Title", sorted by time. The first line is always at 0:00 (video platforms
@@ -26,7 +27,7 @@ export function chapterLines(chapters: PublishBundle['chapters']): string[] {
 export function videoDescription(bundle: PublishBundle): string {
   const { tutorial } = bundle;
   const blocks: string[] = [];
-  blocks.push(introText(bundle.doc) || `${tutorial.title}: a step-by-step paper craft tutorial by ${tutorial.authorName}.`);
+  blocks.push(introText(bundle.doc) || endSentence(`${tutorial.title}: a step-by-step paper craft tutorial by ${tutorial.authorName}`));
   if (tutorial.publicUrl) blocks.push(`The written tutorial, with the cut list and a printable template: ${tutorial.publicUrl}`);
 
   const chapters = chapterLines(bundle.chapters);
@@ -43,7 +44,7 @@ export function videoDescription(bundle: PublishBundle): string {
         const d = supplyDetails(s);
         const link = s.url ? `: ${s.url}` : '';
         const code = d.code ? ` (discount code ${d.code})` : '';
-        lines.push(`- ${s.name}${d.quantity}${d.note}${link}${code}`);
+        lines.push(`- ${s.name}${sponsoredTag(s)}${d.quantity}${d.note}${link}${code}`);
       }
     }
     blocks.push(lines.join('\n'));

@@ -67,12 +67,14 @@ export interface DocCallout {
 
 /** The document's own tips and cautions outside the steps. */
 export function topLevelCallouts(doc: JSONContent): DocCallout[] {
-  return (doc?.content ?? []).filter((n) => n.type === 'tip' || n.type === 'caution').map((n) => ({ kind: n.type as 'tip' | 'caution', content: n.content ?? [] }));
+  return (doc?.content ?? [])
+    .filter((n) => n.type === 'tip' || n.type === 'caution')
+    .map((n) => ({ kind: n.type as 'tip' | 'caution', content: n.content ?? [] }));
 }
 
 /** "papershop.example/kraft-80": an address short enough to type from paper (no scheme, query or fragment). */
 export function shortUrl(url: string, max = 48): string {
-  let s = url;
+  let s: string;
   try {
     const u = new URL(url);
     s = `${u.hostname.replace(/^www\./, '')}${u.pathname === '/' ? '' : u.pathname.replace(/\/$/, '')}`;

@@ -42,6 +42,7 @@ const SUBSTITUTES: Record<string, string> = {
   '≈': '~',
   '⌀': 'dia. ',
   '→': '->',
+  '↔': '<->',
   '←': '<-',
   '×': 'x',
   '½': '1/2',

@@ -40,9 +40,12 @@ describe('handoutPdf', () => {
     expect(text).toContain('268.3 mm');
     expect(text).toContain('2 in (50.8 mm) from the top (tab)');
     expect(text).toContain('45 mm x 80 mm');
-    for (const [i, title] of ['Cut the pieces', 'Score the wall strips', 'Glue the wall to the base', 'Cover the lid'].entries()) expect(text).toContain(`${i + 1}. ${title}`);
+    for (const [i, title] of ['Cut the pieces', 'Score the wall strips', 'Glue the wall to the base', 'Cover the lid'].entries())
+      expect(text).toContain(`${i + 1}. ${title}`);
     expect(text).toContain('Round hatbox');
-    expect(text).toContain('Kraft cardstock, 80 lb (3 sheets)');
+    // A sponsored item says so beside its name on paper too (FTC Endorsement Guides, 16 CFR 255).
+    expect(text).toContain('Kraft cardstock, 80 lb (sponsored link) (3 sheets)');
+    expect(text).not.toContain('Floral patterned paper (sponsored link)');
     expect(text).toContain('papershop.example/kraft-80 · discount code HATBOX10');
     expect(text).toContain('glue guide (papershop.example/glue-guide)');
     expect(text).toContain('Clip the overlap with a binder clip');
@@ -54,6 +57,22 @@ describe('handoutPdf', () => {
     const text = (await probePdf(await handoutPdf(bundle, { paper: 'a4' }))).map((p) => p.text).join(' ');
     for (const line of safetyNotes(new Set(['blade', 'adhesive']))) expect(text).toContain(line.slice(0, 40));
     expect(text).not.toContain('Heat tools:');
+  });
+
+  it('says the grain a piece is cut with beside its material, as the template draws it', async () => {
+    const withGrain = { ...bundle, pieces: bundle.pieces.map((p) => (p.id === 'wall' ? { ...p, grain: 'length' as const } : p)) };
+    const text = (await probePdf(await handoutPdf(withGrain, { paper: 'letter' }))).map((p) => p.text).join(' ');
+    // The fonts have no arrow glyph, so the arrow prints as "<->" (fonts.ts substitutes it).
+    expect(text).toContain('grain <-> along its length');
+    expect((await probePdf(await handoutPdf(bundle, { paper: 'letter' }))).map((p) => p.text).join(' ')).not.toContain('grain <->');
+  });
+
+  it('the blade caution says to cut away from the fingers, change dull blades and keep blades from children (common practice)', async () => {
+    const text = (await probePdf(await handoutPdf(bundle, { paper: 'letter' }))).map((p) => p.text).join(' ');
+    expect(text).toContain('cut away from your fingers');
+    expect(text).toContain('change a dull blade');
+    expect(text).toContain('children');
+    expect(text).toContain('use your own judgement');
   });
 
   it('embeds the cover, the step photos and the QR code as images, and both fonts', async () => {
@@ -87,7 +106,11 @@ describe('handoutPdf', () => {
       steps.push({
         type: 'step',
         attrs: { atMs: i * 10_000, chapterId: null },
-        content: [{ type: 'stepTitle', content: [{ type: 'text', text: `Panel ${i}` }] }, { type: 'paragraph', content: [{ type: 'text', text: words }] }, { type: 'still', attrs: { stillId: `l${i}`, src: `/media/l${i}.jpg`, alt: '', caption: '', width: null, height: null } }],
+        content: [
+          { type: 'stepTitle', content: [{ type: 'text', text: `Panel ${i}` }] },
+          { type: 'paragraph', content: [{ type: 'text', text: words }] },
+          { type: 'still', attrs: { stillId: `l${i}`, src: `/media/l${i}.jpg`, alt: '', caption: '', width: null, height: null } },
+        ],
       });
     }
     const long: PublishBundle = { ...bundle, stills, doc: { type: 'doc', content: steps } };
@@ -119,7 +142,11 @@ describe('handoutPdf', () => {
         {
           type: 'step',
           attrs: { atMs: null, chapterId: null },
-          content: [{ type: 'stepTitle', content: [{ type: 'text', text: 'A very long fold' }] }, { type: 'paragraph', content: [{ type: 'text', text: words }] }, { type: 'still', attrs: { stillId: 's1', src: '/media/s1.jpg', alt: '', caption: '', width: null, height: null } }],
+          content: [
+            { type: 'stepTitle', content: [{ type: 'text', text: 'A very long fold' }] },
+            { type: 'paragraph', content: [{ type: 'text', text: words }] },
+            { type: 'still', attrs: { stillId: 's1', src: '/media/s1.jpg', alt: '', caption: '', width: null, height: null } },
+          ],
         },
       ],
     };
@@ -141,7 +168,10 @@ describe('detectHazards', () => {
     expect(detectHazards({ ...base, supplies: [supply('tool', 'Paper trimmer')] })).toEqual(new Set(['blade']));
     expect(detectHazards({ ...base, supplies: [supply('tool', 'Heat gun')] })).toEqual(new Set(['heat']));
     expect(detectHazards({ ...base, supplies: [supply('adhesive', 'Double-sided tape')] })).toEqual(new Set(['adhesive']));
-    const doc: JSONContent = { type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Melt the embossing powder, then spray the fixative.' }] }] };
+    const doc: JSONContent = {
+      type: 'doc',
+      content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Melt the embossing powder, then spray the fixative.' }] }],
+    };
     expect(detectHazards({ doc, supplies: [] })).toEqual(new Set(['heat', 'adhesive']));
   });
 

@@ -3,8 +3,6 @@
  * Sizes are worked out before resizing (so the HTML can be written without touching pixels)
  * and the resize is told the exact size, so the files always match the HTML's width and height.
  */
-import { writeFile } from 'node:fs/promises';
-import { join } from 'node:path';
 import sharp from 'sharp';
 
 /** Widths of the blog's image files: the main one and the smaller srcset candidate. */
@@ -23,8 +21,8 @@ export interface ImageVariant {
 export interface BlogImage {
   /** The still's id. */
   still: string;
-  /** The full-size source JPEG. */
-  file: string;
+  /** The full-size source JPEG (a path, or its bytes from object storage). */
+  file: string | Buffer;
   /** File name of the main (up to 1200 px wide) copy. */
   name: string;
   width: number;
@@ -34,11 +32,11 @@ export interface BlogImage {
 }
 
 /** The displayed size of an image file: EXIF orientation applied. */
-export async function imageSize(file: string): Promise<{ width: number; height: number }> {
+export async function imageSize(file: string | Buffer): Promise<{ width: number; height: number }> {
   const m = await sharp(file).metadata();
   const width = m.autoOrient?.width ?? m.width;
   const height = m.autoOrient?.height ?? m.height;
-  if (!width || !height) throw new Error(`not an image with a size: ${file}`);
+  if (!width || !height) throw new Error(`not an image with a size: ${typeof file === 'string' ? file : `${file.length} bytes`}`);
   return { width, height };
 }
 
@@ -58,7 +56,7 @@ export function blogVariants(source: { width: number; height: number }, base: st
 }
 
 /** One resized JPEG at exactly the given size. */
-export async function resizeJpeg(file: string, size: { width: number; height: number }, quality = BLOG_QUALITY): Promise<Buffer> {
+export async function resizeJpeg(file: string | Buffer, size: { width: number; height: number }, quality = BLOG_QUALITY): Promise<Buffer> {
   // fit 'fill' with both sides given: the output is exactly this size (at most half a pixel off the source's ratio).
   return sharp(file).rotate().resize({ width: size.width, height: size.height, fit: 'fill' }).jpeg({ quality }).toBuffer();
 }
@@ -68,17 +66,4 @@ export async function renderBlogImage(image: BlogImage): Promise<(ImageVariant &
   const out: (ImageVariant & { data: Buffer })[] = [];
   for (const v of image.srcset) out.push({ ...v, data: await resizeJpeg(image.file, v) });
   return out;
-}
-
-/** Writes every file of the blog's images into `dir` (for the copy-HTML version served from media); returns the paths. */
-export async function writeBlogImages(images: readonly BlogImage[], dir: string): Promise<string[]> {
-  const paths: string[] = [];
-  for (const image of images) {
-    for (const v of await renderBlogImage(image)) {
-      const path = join(dir, v.name);
-      await writeFile(path, v.data);
-      paths.push(path);
-    }
-  }
-  return paths;
 }

@@ -19,6 +19,8 @@ export interface DrawnPath {
   rect: boolean;
   /** True when the path has Bézier curves (how circles are drawn). */
   curved: boolean;
+  /** The part of the bounding box inside the clip in force (a tiled part's window), or null when nothing shows. */
+  visible: { x0: number; y0: number; x1: number; y1: number } | null;
 }
 
 export interface ProbedPage {
@@ -64,12 +66,20 @@ export async function probePdf(data: Buffer): Promise<ProbedPage[]> {
     const paths: DrawnPath[] = [];
     const imageBoxes: { y0: number; y1: number }[] = [];
     let ctm: Matrix = [1, 0, 0, 1, 0, 0];
-    const stack: Matrix[] = [];
+    type Clip = { x0: number; y0: number; x1: number; y1: number } | null;
+    // No clip: the whole plane.
+    let clip: Clip = { x0: -Infinity, y0: -Infinity, x1: Infinity, y1: Infinity };
+    const stack: { ctm: Matrix; clip: Clip }[] = [];
+    const meet = (a: Clip, b: Clip): Clip => {
+      if (!a || !b) return null;
+      const r = { x0: Math.max(a.x0, b.x0), y0: Math.max(a.y0, b.y0), x1: Math.min(a.x1, b.x1), y1: Math.min(a.y1, b.y1) };
+      return r.x0 <= r.x1 && r.y0 <= r.y1 ? r : null;
+    };
     for (let i = 0; i < ops.fnArray.length; i++) {
       const fn = ops.fnArray[i];
       const args = ops.argsArray[i] as unknown[];
-      if (fn === OPS.save) stack.push(ctm);
-      else if (fn === OPS.restore) ctm = stack.pop() ?? [1, 0, 0, 1, 0, 0];
+      if (fn === OPS.save) stack.push({ ctm, clip });
+      else if (fn === OPS.restore) ({ ctm, clip } = stack.pop() ?? { ctm: [1, 0, 0, 1, 0, 0], clip });
       else if (fn === OPS.transform) ctm = multiply(ctm, args as Matrix);
       else if (fn === OPS.paintImageXObject || fn === OPS.paintInlineImageXObject) {
         // An image fills the unit square of the current matrix.
@@ -102,6 +112,12 @@ export async function probePdf(data: Buffer): Promise<ProbedPage[]> {
         const y0 = Math.min(...ys);
         const x1 = Math.max(...xs);
         const y1 = Math.max(...ys);
+        // A path followed by a clip operator sets the clip (its bounding box: our clips are rectangles); it draws nothing.
+        const next = ops.fnArray[i + 1];
+        if (next === OPS.clip || next === OPS.eoClip) {
+          clip = meet(clip, { x0, y0, x1, y1 });
+          continue;
+        }
         paths.push({
           ops: pathOps,
           x0,
@@ -112,6 +128,7 @@ export async function probePdf(data: Buffer): Promise<ProbedPage[]> {
           height: y1 - y0,
           rect: pathOps.length === 1 && pathOps[0] === OPS.rectangle,
           curved: pathOps.some((op) => op === OPS.curveTo || op === OPS.curveTo2 || op === OPS.curveTo3),
+          visible: meet(clip, { x0, y0, x1, y1 }),
         });
       }
     }
@@ -120,7 +137,10 @@ export async function probePdf(data: Buffer): Promise<ProbedPage[]> {
       view: page.view,
       width: vx1 - vx0,
       height: vy1 - vy0,
-      text: items.map((i) => i.str).join(' ').replace(/\s+/g, ' '),
+      text: items
+        .map((i) => i.str)
+        .join(' ')
+        .replace(/\s+/g, ' '),
       items,
       paths,
       images: imageBoxes.length,

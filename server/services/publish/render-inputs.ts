@@ -2,10 +2,10 @@
  * The rows the shared renderers (shared/editor) expect, made from the engine's exact lengths
  * with the engine's display strings.
  */
-import type { RenderPiece, RenderSupply } from '@shared/editor/types';
-import { mmNumber, type Piece, type RulerPrecision } from '@shared/measure';
+import type { RenderContext, RenderPiece, RenderSupply } from '@shared/editor/types';
+import { mmNumber, ROUND_SHAPES, type Piece, type RulerPrecision } from '@shared/measure';
 import { inchText, scoreLineText } from './sizes';
-import type { PublishSupply } from './types';
+import type { PublishBundle, PublishSupply } from './types';
 
 /** Cut-list rows for renderDocHtml: inch display forms ("10 9/16 in") and millimetres for the lighter text. */
 export function toRenderPieces(pieces: readonly Piece[], precision: RulerPrecision): RenderPiece[] {
@@ -15,9 +15,9 @@ export function toRenderPieces(pieces: readonly Piece[], precision: RulerPrecisi
     quantity: p.quantity,
     shape: p.shape,
     width: inchText(p.width, precision),
-    height: inchText(p.shape === 'circle' ? p.width : p.height, precision),
+    height: inchText(ROUND_SHAPES.includes(p.shape) ? p.width : p.height, precision),
     widthMm: mmNumber(p.width),
-    heightMm: mmNumber(p.shape === 'circle' ? p.width : p.height),
+    heightMm: mmNumber(ROUND_SHAPES.includes(p.shape) ? p.width : p.height),
     scoreLines: p.scoreLines.map((s) => scoreLineText(s, precision, true)),
     ...(p.notes?.trim() ? { notes: p.notes.trim() } : {}),
   }));
@@ -34,4 +34,15 @@ export function toRenderSupplies(supplies: readonly PublishSupply[]): RenderSupp
     sponsored: s.sponsored,
     ...(s.discountCode?.trim() ? { discountCode: s.discountCode.trim() } : {}),
   }));
+}
+
+/** The live lists' rows of a bundle, for renderers of the write-up (the Markdown export). */
+export function bundleRenderContext(bundle: PublishBundle): RenderContext {
+  return {
+    pieces: toRenderPieces(bundle.pieces, bundle.precision),
+    supplies: toRenderSupplies(bundle.supplies),
+    precision: bundle.precision,
+    ...(bundle.tutorial.videoUrl ? { videoUrl: bundle.tutorial.videoUrl } : {}),
+    ...(bundle.disclosure?.trim() ? { disclosure: bundle.disclosure.trim() } : {}),
+  };
 }

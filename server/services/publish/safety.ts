@@ -14,9 +14,13 @@ const PATTERNS: Record<Hazard, RegExp> = {
   adhesive: /\b(?:glue|glues|glued|gluing|adhesives?|spray(?:ed|ing)?|glue stick|contact cement|epoxy)\b/i,
 };
 
-/** Which hazards the tutorial involves: from supply categories and names, and the write-up's text. */
-export function detectHazards(bundle: Pick<PublishBundle, 'supplies' | 'doc'>): Set<Hazard> {
+/**
+ * Which hazards the tutorial involves: from supply categories and names, and the write-up's text.
+ * A cut list means pieces to cut, so blades too, whatever the words say.
+ */
+export function detectHazards(bundle: Pick<PublishBundle, 'supplies' | 'doc'> & { pieces?: PublishBundle['pieces'] }): Set<Hazard> {
   const found = new Set<Hazard>();
+  if (bundle.pieces?.length) found.add('blade');
   const texts = [...bundle.supplies.map((s) => `${s.name} ${s.note}`), blocksText(bundle.doc?.content)];
   if (bundle.supplies.some((s) => s.category.trim().toLowerCase() === 'adhesive')) found.add('adhesive');
   for (const hazard of Object.keys(PATTERNS) as Hazard[]) if (texts.some((t) => PATTERNS[hazard].test(t))) found.add(hazard);
@@ -25,7 +29,7 @@ export function detectHazards(bundle: Pick<PublishBundle, 'supplies' | 'doc'>): 
 
 const NOTES: Record<Hazard, string> = {
   blade:
-    'Blades: cut on a cutting mat, with the hand that holds the paper out of the blade’s path; change a dull blade (it slips), and retract or cap the knife whenever you put it down.',
+    'Blades: cut away from your fingers, on a cutting mat, with the hand that holds the paper out of the blade’s path; change a dull blade (it slips); retract or cap the knife whenever you put it down, and keep blades out of children’s reach.',
   heat: 'Heat tools: the nozzle and the heated surface stay hot after use; rest the tool on a heat-proof surface away from paper and cords, and keep fingers out of the airflow.',
   adhesive: 'Adhesives: read the label; use spray adhesive and solvent glues only with fresh air, protect the table, and keep glue away from eyes and mouths.',
 };

@@ -3,17 +3,7 @@
  * engine so the handout, the template, the blog and the description agree to the character.
  */
 import { SHEET_SIZES } from '@shared/geometry';
-import {
-  displayLength,
-  formatAmount,
-  nearestMark,
-  roundForDisplay,
-  toMm,
-  type Length,
-  type Piece,
-  type RulerPrecision,
-  type ScoreLine,
-} from '@shared/measure';
+import { displayLength, formatAmount, nearestMark, roundForDisplay, toMm, type Length, type Piece, type RulerPrecision, type ScoreLine } from '@shared/measure';
 import type { Paper } from './types';
 
 /**
@@ -82,8 +72,20 @@ export function paperSize(paper: Paper): PaperSize {
   const sheet = SHEET_SIZES.find((s) => s.id === paper);
   if (!sheet) throw new RangeError(`unknown paper: ${String(paper)}`);
   if (paper === 'letter') {
-    return { id: paper, width: sheet.width, height: sheet.height, points: [612, 792], svg: { width: '8.5in', height: '11in', unit: 'in', viewBox: '0 0 8.5 11' } };
+    return {
+      id: paper,
+      width: sheet.width,
+      height: sheet.height,
+      points: [612, 792],
+      svg: { width: '8.5in', height: '11in', unit: 'in', viewBox: '0 0 8.5 11' },
+    };
   }
   // 210 x 297 mm is 595.2756 x 841.8898 pt; the PDF reference rounds it to two decimals.
-  return { id: paper, width: sheet.width, height: sheet.height, points: [595.28, 841.89], svg: { width: '210mm', height: '297mm', unit: 'mm', viewBox: '0 0 210 297' } };
+  return {
+    id: paper,
+    width: sheet.width,
+    height: sheet.height,
+    points: [595.28, 841.89],
+    svg: { width: '210mm', height: '297mm', unit: 'mm', viewBox: '0 0 210 297' },
+  };
 }

@@ -7,7 +7,7 @@ import type { JSONContent } from '@tiptap/core';
 import type { Piece } from '@shared/measure';
 
 /** Paper the handout and the template are printed on. */
-export type Paper = 'letter' | 'a4';
+export type { Paper } from '@shared/schemas/publish';
 
 export interface PublishTutorial {
   title: string;
@@ -46,8 +46,8 @@ export interface PublishStill {
   alt: string;
   width: number;
   height: number;
-  /** Absolute path of the full-size JPEG. */
-  file: string;
+  /** The full-size JPEG: its absolute path on disk, or its bytes from object storage. */
+  file: string | Buffer;
 }
 
 /** Everything the publish renderers need about one tutorial. */

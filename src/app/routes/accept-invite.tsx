@@ -15,7 +15,12 @@ export function AcceptInviteRoute() {
   const me = useMe();
   const accept = useAcceptInvitation();
   const navigate = useNavigate();
-  if (invitation.isPending || me.isPending) return <AuthLayout title="Invitation"><Loading /></AuthLayout>;
+  if (invitation.isPending || me.isPending)
+    return (
+      <AuthLayout title="Invitation">
+        <Loading />
+      </AuthLayout>
+    );
   if (invitation.error) {
     return (
       <AuthLayout title="Invitation">

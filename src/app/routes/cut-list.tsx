@@ -4,11 +4,11 @@ import { paths } from '@/config/paths';
 import { useRefreshCutList } from '@/features/cut-list/api/get-pieces';
 import { CutListWorkspace } from '@/features/cut-list/components/cut-list-workspace';
 import { useUpdateTutorial } from '@/features/tutorials/api/tutorial-mutations';
-import type { Tutorial } from '@/features/tutorials/api/types';
+import type { TutorialDto } from '@shared/schemas/tutorial';
 
 /** The Cut list section of a tutorial; the ruler precision belongs to the tutorial, so it is changed here. */
 export function CutListRoute() {
-  const tutorial = useOutletContext<Tutorial>();
+  const tutorial = useOutletContext<TutorialDto>();
   const update = useUpdateTutorial();
   const refresh = useRefreshCutList(tutorial.id);
   return (

@@ -6,7 +6,7 @@ export function NotFoundRoute() {
   const error = useRouteError();
   const missing = !error || (isRouteErrorResponse(error) && error.status === 404);
   return (
-    <main className="mx-auto max-w-xl px-6 py-24 text-center">
+    <main className="mx-auto max-w-xl px-4 sm:px-6 py-24 text-center">
       <h1 className="text-2xl">{missing ? 'This page does not exist' : 'Something went wrong'}</h1>
       <hr className="score-rule my-6" />
       <p className="text-sm text-pencil">{missing ? 'The address may be mistyped, or the page was moved.' : String((error as Error)?.message ?? error)}</p>

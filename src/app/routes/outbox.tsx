@@ -1,26 +1,41 @@
-import { Link, useParams } from 'react-router-dom';
+import { Link, useNavigate, useParams } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
 import { EmptyState } from '@/components/ui/empty-state';
 import { Notice } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
-import { useOutbox, useOutboxMessage } from '@/features/outbox/api/outbox';
+import { useMe } from '@/features/auth/api/get-me';
+import { useDeleteOutboxMessage, useOutbox, useOutboxMessage } from '@/features/outbox/api/outbox';
 
-/** Mail caught by the local fake SMTP server; links inside can be followed directly. */
+/** The signed-in person's own mail, caught by the local fake SMTP server; links inside can be followed directly. */
 export function OutboxRoute() {
   const { messageId } = useParams();
   const list = useOutbox();
+  const me = useMe();
   return (
-    <main className="mx-auto grid max-w-7xl grid-cols-[22rem_1fr] gap-6 px-6 py-8">
+    <main className="mx-auto grid max-w-7xl gap-6 px-4 py-8 sm:px-6 md:grid-cols-[22rem_1fr]">
       <section>
         <h1 className="text-2xl">Outbox</h1>
-        <p className="mt-1 text-sm text-pencil">Mail goes to a local stand-in while no real mail server is set, so it lands here instead of an inbox.</p>
+        <p className="mt-1 text-sm text-pencil">
+          Mail to you{me.data ? ` (${me.data.user.email})` : ''} goes to a local stand-in while no real mail server is set, so it lands here instead of an
+          inbox. Only messages addressed to you are listed.
+        </p>
+        {me.data?.devMailbox && (
+          <p className="mt-2 text-sm">
+            Mail to other addresses, such as an invitation to someone without an account yet, is in the{' '}
+            <a href={paths.devMailbox()} className="text-kraft-dark underline">
+              development mailbox
+            </a>
+            , which opens only on this computer.
+          </p>
+        )}
         <hr className="score-rule my-4" />
         {list.isPending ? (
           <Loading />
         ) : list.error ? (
           <Notice kind="error">{list.error.message}</Notice>
         ) : list.data.messages.length === 0 ? (
-          <EmptyState title="No mail yet">Invitations, password resets and review notices will appear here.</EmptyState>
+          <EmptyState title="No mail for you yet">Password resets, invitations and review notices sent to you will appear here.</EmptyState>
         ) : (
           <ul className="rounded-lg border border-line bg-white text-sm">
             {list.data.messages.map((m) => (
@@ -36,7 +51,9 @@ export function OutboxRoute() {
           </ul>
         )}
       </section>
-      <section>{messageId ? <OutboxMessageView id={messageId} /> : <p className="mt-16 text-center text-sm text-pencil">Pick a message to read it.</p>}</section>
+      <section>
+        {messageId ? <OutboxMessageView id={messageId} /> : <p className="mt-16 text-center text-sm text-pencil">Pick a message to read it.</p>}
+      </section>
     </main>
   );
 }
@@ -54,15 +71,23 @@ const linkify = (text: string) =>
 
 function OutboxMessageView({ id }: { id: string }) {
   const q = useOutboxMessage(id);
+  const remove = useDeleteOutboxMessage();
+  const navigate = useNavigate();
   if (q.isPending) return <Loading />;
   if (q.error) return <Notice kind="error">{q.error.message}</Notice>;
   const m = q.data.message;
   return (
-    <article className="rounded-lg border border-line bg-white p-6">
-      <h2 className="text-xl">{m.subject}</h2>
+    <article className="min-w-0 rounded-lg border border-line bg-white p-4 sm:p-6">
+      <div className="flex flex-wrap items-start justify-between gap-4">
+        <h2 className="text-xl">{m.subject}</h2>
+        <Button variant="danger" size="sm" busy={remove.isPending} onClick={() => remove.mutate(m.id, { onSuccess: () => void navigate(paths.outbox()) })}>
+          Delete
+        </Button>
+      </div>
       <p className="mt-1 text-xs text-pencil">
         From {m.from} to {m.to} · {new Date(m.createdAt).toLocaleString()}
       </p>
+      {remove.error && <Notice kind="error">{remove.error.message}</Notice>}
       <hr className="score-rule my-4" />
       {/* The plain-text part, with links made clickable: no HTML from mail is rendered. */}
       <pre className="whitespace-pre-wrap font-sans text-sm">{linkify(m.text)}</pre>

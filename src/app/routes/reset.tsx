@@ -25,7 +25,7 @@ export function ResetRoute() {
     setFormError(null);
     try {
       await reset.mutateAsync({ token, password });
-      navigate(paths.home(), { replace: true });
+      void navigate(paths.home(), { replace: true });
     } catch (e) {
       setFormError(applyServerErrors(e, setError));
     }
@@ -34,7 +34,15 @@ export function ResetRoute() {
     <AuthLayout title="Choose a new password">
       <form className="flex flex-col gap-4" onSubmit={submit} noValidate>
         {formError && <Notice kind="error">{formError}</Notice>}
-        <TextField label="New password" type="password" autoComplete="new-password" autoFocus {...register('password')} error={formState.errors.password?.message} hint="At least 15 characters." />
+        <TextField
+          label="New password"
+          type="password"
+          autoComplete="new-password"
+          autoFocus
+          {...register('password')}
+          error={formState.errors.password?.message}
+          hint="At least 15 characters."
+        />
         <Button type="submit" busy={reset.isPending}>
           Save and sign in
         </Button>

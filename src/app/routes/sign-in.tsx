@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/field';
 import { Notice } from '@/components/ui/notice';
 import { applyServerErrors } from '@/components/ui/form-errors';
-import { paths } from '@/config/paths';
+import { paths, sameSiteNext } from '@/config/paths';
 import { useSignIn } from '@/features/auth/api/auth-mutations';
 import { useDemo } from '@/features/auth/api/get-demo';
 import { useState } from 'react';
@@ -26,7 +26,7 @@ export function SignInRoute() {
     setFormError(null);
     try {
       await signIn.mutateAsync(values);
-      navigate(params.get('next') || paths.home(), { replace: true });
+      void navigate(sameSiteNext(params.get('next')), { replace: true });
     } catch (e) {
       setFormError(applyServerErrors(e, setError));
     }

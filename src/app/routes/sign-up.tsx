@@ -28,7 +28,7 @@ export function SignUpRoute() {
     setFormError(null);
     try {
       const me = await signUp.mutateAsync({ ...values, invitationToken: invite, studioName: invite ? undefined : values.studioName || undefined });
-      navigate(paths.studio(me.studios[0].id), { replace: true });
+      void navigate(paths.studio(me.studios[0].id), { replace: true });
     } catch (e) {
       setFormError(applyServerErrors(e, setError));
     }
@@ -47,7 +47,14 @@ export function SignUpRoute() {
           error={formState.errors.password?.message}
           hint="At least 15 characters. A few words in a row are easy to remember and hard to guess."
         />
-        {!invite && <TextField label="Studio name" placeholder="e.g. Willow Street Cards" {...register('studioName')} hint="Your team’s workspace; you can rename it later." />}
+        {!invite && (
+          <TextField
+            label="Studio name"
+            placeholder="e.g. Willow Street Cards"
+            {...register('studioName')}
+            hint="Your team’s workspace; you can rename it later."
+          />
+        )}
         <Button type="submit" busy={signUp.isPending}>
           Create account
         </Button>

@@ -12,7 +12,7 @@ export function SignedInLayoutRoute() {
   const navigate = useNavigate();
   if (me.isPending) return <Loading />;
   if (!me.data) return <Navigate to={paths.signIn(location.pathname + location.search)} replace />;
-  return <AppShell me={me.data} onSignOut={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn()) })} />;
+  return <AppShell me={me.data} onSignOut={() => signOut.mutate(undefined, { onSuccess: () => void navigate(paths.signIn()) })} />;
 }
 
 /** The home address opens the first studio. */
@@ -21,7 +21,7 @@ export function HomeRedirectRoute() {
   const first = me.data?.studios[0];
   if (!first) {
     return (
-      <main className="mx-auto max-w-xl px-6 py-24 text-center">
+      <main className="mx-auto max-w-xl px-4 sm:px-6 py-24 text-center">
         <h1 className="text-2xl">You are not in a studio yet</h1>
         <p className="mt-3 text-sm text-pencil">Ask a studio owner to invite you; the link in their e-mail brings you in.</p>
       </main>

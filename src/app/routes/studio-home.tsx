@@ -8,6 +8,7 @@ import { paths } from '@/config/paths';
 import { useTutorials } from '@/features/tutorials/api/get-tutorials';
 import { CreateTutorialForm } from '@/features/tutorials/components/create-tutorial-form';
 import { TutorialRow } from '@/features/tutorials/components/tutorial-row';
+import { MyClasses } from '@/features/classes/components/my-classes';
 
 /** The studio's tutorials, filterable by state, with a form to start a new one. */
 export function StudioHomeRoute() {
@@ -17,17 +18,20 @@ export function StudioHomeRoute() {
   const [q, setQ] = useState('');
   const list = useTutorials(studioId, { state, q: q.trim() || undefined });
   const canCreate = list.data?.abilities.createTutorial;
+  // A student sees published tutorials only, so the other states would be chips that find nothing.
+  const chips = list.data && !list.data.abilities.seeAllTutorials ? [undefined, 'published' as const] : [undefined, ...TUTORIAL_STATES];
   return (
-    <main className="mx-auto max-w-5xl px-6 py-8">
+    <main className="mx-auto max-w-5xl px-4 sm:px-6 py-8">
       <h1 className="text-2xl">Tutorials</h1>
       <hr className="score-rule my-4" />
+      <MyClasses />
       {canCreate && (
         <div className="mb-6 rounded-lg border border-line bg-white p-4">
           <CreateTutorialForm studioId={studioId} onCreated={(t) => navigate(paths.tutorial(t.id))} />
         </div>
       )}
       <div className="mb-3 flex flex-wrap items-center gap-2" role="group" aria-label="Filter by state">
-        {[undefined, ...TUTORIAL_STATES].map((s) => (
+        {chips.map((s) => (
           <button
             key={s ?? 'all'}
             type="button"
@@ -42,7 +46,7 @@ export function StudioHomeRoute() {
           type="search"
           aria-label="Search titles"
           placeholder="Search titles"
-          className="ml-auto rounded-md border border-line bg-white px-3 py-1.5 text-sm"
+          className="ml-auto rounded-md border border-field bg-white px-3 py-1.5 text-sm"
           value={q}
           onChange={(e) => setQ(e.target.value)}
         />

@@ -9,7 +9,7 @@ export function AuthLayout({ title, children, aside }: { title: string; children
       <Link to={paths.home()} className="font-serif text-2xl font-bold tracking-tight text-ink">
         Cardwright
       </Link>
-      <main className="w-full max-w-md rounded-xl border border-line bg-white p-8 shadow-sm">
+      <main className="w-full max-w-md rounded-xl border border-line bg-white p-5 shadow-sm sm:p-8">
         <h1 className="text-xl">{title}</h1>
         <hr className="score-rule my-4" />
         {children}

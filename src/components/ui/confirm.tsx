@@ -2,7 +2,16 @@ import { useEffect, useId, useRef, type ReactNode } from 'react';
 import { Button } from './button';
 
 /** A modal question on the native <dialog> (focus trap and Escape come with it). */
-export function ConfirmDialog(props: { open: boolean; title: string; children?: ReactNode; confirmLabel: string; danger?: boolean; busy?: boolean; onConfirm: () => void; onCancel: () => void }) {
+export function ConfirmDialog(props: {
+  open: boolean;
+  title: string;
+  children?: ReactNode;
+  confirmLabel: string;
+  danger?: boolean;
+  busy?: boolean;
+  onConfirm: () => void;
+  onCancel: () => void;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   const titleId = useId();
   useEffect(() => {
@@ -12,7 +21,12 @@ export function ConfirmDialog(props: { open: boolean; title: string; children?: 
     if (!props.open && d.open) d.close();
   }, [props.open]);
   return (
-    <dialog ref={ref} aria-labelledby={titleId} onCancel={props.onCancel} className="m-auto w-full max-w-md rounded-lg border border-line bg-paper p-6 text-ink backdrop:bg-ink/30">
+    <dialog
+      ref={ref}
+      aria-labelledby={titleId}
+      onCancel={props.onCancel}
+      className="m-auto w-full max-w-md rounded-lg border border-line bg-paper p-6 text-ink backdrop:bg-ink/30"
+    >
       <h2 id={titleId} className="text-lg">
         {props.title}
       </h2>

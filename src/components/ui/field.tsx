@@ -19,7 +19,7 @@ export const TextField = forwardRef<HTMLInputElement, InputHTMLAttributes<HTMLIn
         id={fid}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${fid}-error` : hint ? `${fid}-hint` : undefined}
-        className={`rounded-md border bg-white px-3 py-2 text-sm outline-none focus:border-kraft ${error ? 'border-rosehip' : 'border-line'}`}
+        className={`rounded-md border bg-white px-3 py-2 text-sm focus:border-kraft ${error ? 'border-rosehip' : 'border-field'}`}
         {...rest}
       />
       {hint && !error && (
@@ -48,7 +48,7 @@ export const SelectField = forwardRef<HTMLSelectElement, SelectHTMLAttributes<HT
       <label htmlFor={fid} className="text-sm font-medium">
         {label}
       </label>
-      <select ref={ref} id={fid} className="rounded-md border border-line bg-white px-3 py-2 text-sm focus:border-kraft" {...rest}>
+      <select ref={ref} id={fid} className="rounded-md border border-field bg-white px-3 py-2 text-sm focus:border-kraft" {...rest}>
         {children}
       </select>
       {error && <p className="text-xs text-rosehip">{error}</p>}

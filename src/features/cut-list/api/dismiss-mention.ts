@@ -1,10 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { cutListKeys } from './keys';
-import type { Mentions } from './types';
+import type { MentionDismissedDto, MentionsDto } from '@shared/schemas/piece';
 
 export const dismissMention = ({ tutorialId, key, dismissed }: { tutorialId: string; key: string; dismissed: boolean }) =>
-  api<{ key: string; dismissed: boolean }>(`/tutorials/${tutorialId}/mentions/dismiss`, { method: 'POST', body: { key, dismissed } });
+  api<MentionDismissedDto>(`/tutorials/${tutorialId}/mentions/dismiss`, { method: 'POST', body: { key, dismissed } });
 
 /** Marks a mention "not a piece" (or brings it back); the list changes at once. */
 export function useDismissMention(tutorialId: string) {
@@ -12,7 +12,7 @@ export function useDismissMention(tutorialId: string) {
   return useMutation({
     mutationFn: (v: { key: string; dismissed: boolean }) => dismissMention({ tutorialId, ...v }),
     onSuccess: ({ key, dismissed }) => {
-      qc.setQueryData(cutListKeys.mentions(tutorialId), (old: Mentions | undefined) =>
+      qc.setQueryData(cutListKeys.mentions(tutorialId), (old: MentionsDto | undefined) =>
         old ? { ...old, mentions: old.mentions.map((m) => (m.key === key ? { ...m, dismissed } : m)) } : old,
       );
       return qc.invalidateQueries({ queryKey: cutListKeys.mentions(tutorialId) });

@@ -1,20 +1,19 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { z } from 'zod';
-import type { materialSchema, updateMaterialSchema } from '@shared/schemas/piece';
+import type { materialSchema, updateMaterialSchema, MaterialDto } from '@shared/schemas/piece';
 import { api } from '@/lib/api-client';
-import { cutListKeys } from './keys';
-import type { Material } from './types';
+import { refreshCutList } from './keys';
 
 export type MaterialInput = z.input<typeof materialSchema>;
 export type MaterialChange = z.input<typeof updateMaterialSchema>;
 
 export const createMaterial = ({ tutorialId, ...input }: MaterialInput & { tutorialId: string }) =>
-  api<Material>(`/tutorials/${tutorialId}/materials`, { method: 'POST', body: input });
-export const updateMaterial = ({ id, ...input }: MaterialChange & { id: string }) => api<Material>(`/materials/${id}`, { method: 'PATCH', body: input });
+  api<MaterialDto>(`/tutorials/${tutorialId}/materials`, { method: 'POST', body: input });
+export const updateMaterial = ({ id, ...input }: MaterialChange & { id: string }) => api<MaterialDto>(`/materials/${id}`, { method: 'PATCH', body: input });
 export const deleteMaterial = (id: string) => api<void>(`/materials/${id}`, { method: 'DELETE' });
 
 // A material's sheet changes its pieces' checks and the sheet plan; a rename moves pieces along.
-const invalidate = (qc: ReturnType<typeof useQueryClient>, tutorialId: string) => qc.invalidateQueries({ queryKey: cutListKeys.tutorial(tutorialId) });
+const invalidate = refreshCutList;
 
 /** Adds a material with its stock sheet. */
 export function useCreateMaterial(tutorialId: string) {

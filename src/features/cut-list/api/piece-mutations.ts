@@ -1,23 +1,22 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CreatePieceInput, UpdatePieceInput } from '@shared/schemas/piece';
+import type { CreatePieceInput, UpdatePieceInput, CutListDto, PieceDto } from '@shared/schemas/piece';
 import { api } from '@/lib/api-client';
-import { cutListKeys } from './keys';
-import type { CutList, Piece } from './types';
+import { cutListKeys, refreshCutList } from './keys';
 
 export const createPiece = ({ tutorialId, ...input }: CreatePieceInput & { tutorialId: string }) =>
-  api<Piece>(`/tutorials/${tutorialId}/pieces`, { method: 'POST', body: input });
-export const updatePiece = ({ id, ...input }: UpdatePieceInput & { id: string }) => api<Piece>(`/pieces/${id}`, { method: 'PATCH', body: input });
+  api<PieceDto>(`/tutorials/${tutorialId}/pieces`, { method: 'POST', body: input });
+export const updatePiece = ({ id, ...input }: UpdatePieceInput & { id: string }) => api<PieceDto>(`/pieces/${id}`, { method: 'PATCH', body: input });
 /**
  * A change for one piece that also carries its material. The shared update schema gives
  * `material` a default of '', so a PATCH without it would empty the piece's material; sending
  * the current one keeps it until the schema leaves absent fields alone.
  */
-export const pieceChange = (p: Pick<Piece, 'material'>, change: UpdatePieceInput): UpdatePieceInput => ({ material: p.material, ...change });
+export const pieceChange = (p: Pick<PieceDto, 'material'>, change: UpdatePieceInput): UpdatePieceInput => ({ material: p.material, ...change });
 
 export const deletePiece = (id: string) => api<void>(`/pieces/${id}`, { method: 'DELETE' });
 
 // A piece's checks depend on the others (mats) and the sheet plan on all of them: refresh the whole cut list.
-const invalidate = (qc: ReturnType<typeof useQueryClient>, tutorialId: string) => qc.invalidateQueries({ queryKey: cutListKeys.tutorial(tutorialId) });
+const invalidate = refreshCutList;
 
 /** Adds a piece at the end of the cut list. */
 export function useCreatePiece(tutorialId: string) {
@@ -31,7 +30,9 @@ export function useUpdatePiece(tutorialId: string) {
   return useMutation({
     mutationFn: updatePiece,
     onSuccess: (p) => {
-      qc.setQueryData(cutListKeys.pieces(tutorialId), (old: CutList | undefined) => (old ? { ...old, pieces: old.pieces.map((x) => (x.id === p.id ? p : x)) } : old));
+      qc.setQueryData(cutListKeys.pieces(tutorialId), (old: CutListDto | undefined) =>
+        old ? { ...old, pieces: old.pieces.map((x) => (x.id === p.id ? p : x)) } : old,
+      );
       return invalidate(qc, tutorialId);
     },
   });
@@ -50,13 +51,15 @@ export function useDeletePiece(tutorialId: string) {
 export function useMovePiece(tutorialId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async ({ pieces, id, by }: { pieces: Piece[]; id: string; by: -1 | 1 }) => {
+    mutationFn: async ({ pieces, id, by }: { pieces: PieceDto[]; id: string; by: -1 | 1 }) => {
       const from = pieces.findIndex((p) => p.id === id);
       const to = from + by;
       if (from < 0 || to < 0 || to >= pieces.length) return;
       const order = [...pieces];
       [order[from], order[to]] = [order[to]!, order[from]!];
-      qc.setQueryData(cutListKeys.pieces(tutorialId), (old: CutList | undefined) => (old ? { ...old, pieces: order.map((p, i) => ({ ...p, position: i })) } : old));
+      qc.setQueryData(cutListKeys.pieces(tutorialId), (old: CutListDto | undefined) =>
+        old ? { ...old, pieces: order.map((p, i) => ({ ...p, position: i })) } : old,
+      );
       for (const [i, p] of order.entries()) if (p.position !== i) await updatePiece({ id: p.id, ...pieceChange(p, { position: i }) });
     },
     onSettled: () => invalidate(qc, tutorialId),

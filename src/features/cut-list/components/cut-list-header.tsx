@@ -24,10 +24,15 @@ export function CutListHeader(props: {
       <span className="flex-1" />
       <fieldset className="flex items-center gap-2">
         <legend className="sr-only">Units shown</legend>
-        <span aria-hidden className="text-sm text-pencil">Show</span>
+        <span aria-hidden className="text-sm text-pencil">
+          Show
+        </span>
         <div className="inline-flex rounded-md border border-line bg-white p-0.5">
           {(['in', 'mm', 'both'] as const).map((m) => (
-            <label key={m} className={`cursor-pointer rounded px-2.5 py-1 text-sm has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-kraft ${props.units === m ? 'bg-kraft text-white' : 'text-ink hover:bg-kraft-light'}`}>
+            <label
+              key={m}
+              className={`cursor-pointer rounded px-2.5 py-1 text-sm has-[:focus-visible]:outline-2 has-[:focus-visible]:outline-kraft ${props.units === m ? 'bg-kraft text-white' : 'text-ink hover:bg-kraft-light'}`}
+            >
               <input type="radio" name="cut-list-units" value={m} checked={props.units === m} onChange={() => props.onUnits(m)} className="sr-only" />
               {UNIT_LABEL[m]}
             </label>
@@ -38,7 +43,7 @@ export function CutListHeader(props: {
         <span className="text-pencil">Ruler precision</span>
         {props.onPrecision ? (
           <select
-            className="rounded-md border border-line bg-white px-2 py-1 text-sm"
+            className="rounded-md border border-field bg-white px-2 py-1 text-sm"
             value={props.precision}
             disabled={props.precisionBusy}
             onChange={(e) => props.onPrecision!(Number(e.target.value) as RulerPrecision)}
@@ -53,7 +58,11 @@ export function CutListHeader(props: {
           <span className="font-medium">1/{props.precision} in</span>
         )}
       </label>
-      {props.precisionError && <p role="alert" className="w-full text-right text-sm text-rosehip">{props.precisionError}</p>}
+      {props.precisionError && (
+        <p role="alert" className="w-full text-right text-sm text-rosehip">
+          {props.precisionError}
+        </p>
+      )}
     </div>
   );
 }

@@ -63,13 +63,20 @@ export function CutListWorkspace(props: {
         precisionError={props.precisionError}
       />
       <hr className="score-rule my-4" />
-      {!canEdit && <div className="mb-4"><Notice>You can read this cut list; only people who can edit the tutorial can change it.</Notice></div>}
+      {!canEdit && (
+        <div className="mb-4">
+          <Notice>You can read this cut list; only people who can edit the tutorial can change it.</Notice>
+        </div>
+      )}
       <div className="grid grid-cols-1 gap-6 xl:grid-cols-[minmax(0,1fr)_19rem]">
         <div className="min-w-0 space-y-6">
           {pieces.length === 0 ? (
             <EmptyState title="No pieces yet">
               {canEdit ? (
-                <p>Add the first piece with the form below, or make one in a click from the measurements said in the recording (Mentions, at the side). Helpers below work out wrap strips, lids and card bases.</p>
+                <p>
+                  Add the first piece with the form below, or make one in a click from the measurements said in the recording (Mentions, at the side). Helpers
+                  below work out wrap strips, lids and card bases.
+                </p>
               ) : (
                 <p>Nobody has added a piece to this cut list yet.</p>
               )}

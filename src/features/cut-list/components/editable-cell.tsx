@@ -28,6 +28,8 @@ export function EditableCell(props: {
   const { canEdit, defaultUnit, precision } = useCutList();
   const kind = props.kind ?? 'text';
   const hintId = useId();
+  const nameId = useId();
+  const shownId = useId();
   const edit = useInlineEdit({
     value: props.initial,
     onSave: props.onSave,
@@ -38,16 +40,23 @@ export function EditableCell(props: {
   if (!canEdit) return <div className={props.className}>{props.display}</div>;
 
   if (!editing) {
+    // The name says what the button does and then what it shows ("Edit width of Base 4 in"), so
+    // speech users can say the words they see (WCAG 2.5.3, label in name).
     return (
-      <button
-        ref={edit.buttonRef}
-        type="button"
-        onClick={edit.open}
-        aria-label={`Edit ${props.label}`}
-        className={`-mx-1 block w-[calc(100%+0.5rem)] rounded px-1 py-0.5 text-left hover:bg-kraft-light/60 focus-visible:bg-kraft-light/60 ${props.className ?? ''}`}
-      >
-        {props.display}
-      </button>
+      <>
+        <button
+          ref={edit.buttonRef}
+          type="button"
+          onClick={edit.open}
+          aria-labelledby={`${nameId} ${shownId}`}
+          className={`-mx-1 block w-[calc(100%+0.5rem)] rounded px-1 py-0.5 text-left hover:bg-kraft-light/60 focus-visible:bg-kraft-light/60 ${props.className ?? ''}`}
+        >
+          <span id={shownId}>{props.display}</span>
+        </button>
+        <span id={nameId} hidden>
+          Edit {props.label}
+        </span>
+      </>
     );
   }
   // The field may grow past a narrow column and its reading floats below it, so the row keeps its height while typing.
@@ -58,7 +67,7 @@ export function EditableCell(props: {
         aria-label={props.label}
         aria-invalid={error ? true : undefined}
         aria-describedby={hintId}
-        className={`relative z-10 w-full rounded border bg-white px-1.5 py-0.5 text-sm shadow-sm outline-none focus:border-kraft ${kind === 'length' ? 'min-w-44' : kind === 'number' ? 'min-w-16' : 'min-w-40'} ${error ? 'border-rosehip' : 'border-line'}`}
+        className={`relative z-10 w-full rounded border bg-white px-1.5 py-0.5 text-sm shadow-sm focus:border-kraft ${kind === 'length' ? 'min-w-44' : kind === 'number' ? 'min-w-16' : 'min-w-40'} ${error ? 'border-rosehip' : 'border-field'}`}
         value={text}
         inputMode={kind === 'number' ? 'numeric' : undefined}
         placeholder={props.placeholder}

@@ -8,10 +8,31 @@ import { saveErrorText } from './editable-cell';
 import { LengthPreview } from './length-text';
 
 /** A helper's length input with how it was read beside it. */
-export function HelperLength({ label, value, onChange, error, hint, placeholder }: { label: string; value: string; onChange: (v: string) => void; error?: string; hint?: ReactNode; placeholder?: string }) {
+export function HelperLength({
+  label,
+  value,
+  onChange,
+  error,
+  hint,
+  placeholder,
+}: {
+  label: string;
+  value: string;
+  onChange: (v: string) => void;
+  error?: string;
+  hint?: ReactNode;
+  placeholder?: string;
+}) {
   return (
     <div>
-      <TextField label={label} value={value} placeholder={placeholder} onChange={(e) => onChange(e.target.value)} error={error} hint={!value && !error ? hint : undefined} />
+      <TextField
+        label={label}
+        value={value}
+        placeholder={placeholder}
+        onChange={(e) => onChange(e.target.value)}
+        error={error}
+        hint={!value && !error ? hint : undefined}
+      />
       {!error && <LengthPreview text={value} />}
     </div>
   );
@@ -34,7 +55,17 @@ export function Working({ lines, result }: { lines: string[]; result: ReactNode 
 }
 
 /** Name and material for the piece a helper makes, and the button that adds it. */
-export function AddAsPiece({ defaultName, piece, extra, disabled }: { defaultName: string; piece: (name: string, material: string) => CreatePieceInput | string; extra?: ReactNode; disabled?: boolean }) {
+export function AddAsPiece({
+  defaultName,
+  piece,
+  extra,
+  disabled,
+}: {
+  defaultName: string;
+  piece: (name: string, material: string) => CreatePieceInput | string;
+  extra?: ReactNode;
+  disabled?: boolean;
+}) {
   const { tutorialId, canEdit } = useCutList();
   const create = useCreatePiece(tutorialId);
   const [name, setName] = useState(defaultName);
@@ -62,8 +93,16 @@ export function AddAsPiece({ defaultName, piece, extra, disabled }: { defaultNam
       <Button className="mt-6" busy={create.isPending} disabled={disabled} onClick={() => void add()}>
         Add as piece
       </Button>
-      {error && <p role="alert" className="w-full text-sm text-rosehip">{error}</p>}
-      {added && <p role="status" className="w-full text-sm text-sage">{added}</p>}
+      {error && (
+        <p role="alert" className="w-full text-sm text-rosehip">
+          {error}
+        </p>
+      )}
+      {added && (
+        <p role="status" className="w-full text-sm text-sage">
+          {added}
+        </p>
+      )}
     </div>
   );
 }

@@ -1,5 +1,5 @@
 import { readTyped, showLength } from '../utils/lengths';
-import type { LengthDto } from '../api/types';
+import type { LengthDto } from '@shared/schemas/piece';
 import { useCutList } from './cut-list-context';
 
 /** A length as the crafter writes it, with the other system beside it in a lighter tone. */
@@ -11,7 +11,7 @@ export function LengthText({ value, stacked = false, prefix }: { value: LengthDt
       <span className="whitespace-nowrap">
         {prefix}
         {t.primary}
-      </span>
+      </span>{' '}
       {t.secondary && <span className="whitespace-nowrap text-xs text-pencil">{t.secondary}</span>}
     </span>
   );

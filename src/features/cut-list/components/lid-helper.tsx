@@ -20,8 +20,21 @@ export function LidHelper() {
       </p>
       <div className="mt-3 grid grid-cols-3 gap-3">
         <HelperLength label="Base diameter" placeholder="e.g. 6 3/8" value={f.diameter} onChange={set('diameter')} error={errors.diameter} />
-        <HelperLength label="Wall thickness" placeholder="e.g. 1/32" value={f.wall} onChange={set('wall')} error={errors.wall} hint="the strip around the base; empty for none" />
-        <HelperLength label="Clearance each side" placeholder={`${formatLength(DEFAULT_LID_CLEARANCE)} if empty`} value={f.clearance} onChange={set('clearance')} error={errors.clearance} />
+        <HelperLength
+          label="Wall thickness"
+          placeholder="e.g. 1/32"
+          value={f.wall}
+          onChange={set('wall')}
+          error={errors.wall}
+          hint="the strip around the base; empty for none"
+        />
+        <HelperLength
+          label="Clearance each side"
+          placeholder={`${formatLength(DEFAULT_LID_CLEARANCE)} if empty`}
+          value={f.clearance}
+          onChange={set('clearance')}
+          error={errors.clearance}
+        />
       </div>
       {r.ok ? (
         <div className="mt-4">
@@ -29,13 +42,20 @@ export function LidHelper() {
             lines={r.result.working}
             result={
               <p>
-                Cut the lid circle <strong>⌀ {formatLength(r.result.lidDiameter)}</strong> <span className="text-sm text-pencil">{formatMm(r.result.lidDiameter)}</span>
+                Cut the lid circle <strong>⌀ {formatLength(r.result.lidDiameter)}</strong>{' '}
+                <span className="text-sm text-pencil">{formatMm(r.result.lidDiameter)}</span>
               </p>
             }
           />
           <AddAsPiece
             defaultName="Lid"
-            piece={(name, material) => ({ name: name || 'Lid', material, shape: 'circle', width: formatLength(r.result.lidDiameter), notes: `Fits over a ${f.diameter.trim()} base` })}
+            piece={(name, material) => ({
+              name: name || 'Lid',
+              material,
+              shape: 'circle',
+              width: formatLength(r.result.lidDiameter),
+              notes: `Fits over a ${f.diameter.trim()} base`,
+            })}
           />
         </div>
       ) : (

@@ -1,12 +1,12 @@
 import { useEffect, useRef, useState } from 'react';
 import { useNavigate } from 'react-router-dom';
 import { formatTimestamp } from '@shared/transcript/timestamp';
-import type { Piece } from '../api/types';
+import type { PieceDto } from '@shared/schemas/piece';
 import { useCutList } from './cut-list-context';
 import { saveErrorText } from './editable-cell';
 
 /** The piece a mat sits on: a choice of the other pieces, saved as soon as it changes. */
-export function MatCell({ piece, pieces, onSave }: { piece: Piece; pieces: Piece[]; onSave: (matOnId: string | null) => Promise<unknown> }) {
+export function MatCell({ piece, pieces, onSave }: { piece: PieceDto; pieces: PieceDto[]; onSave: (matOnId: string | null) => Promise<unknown> }) {
   const { canEdit } = useCutList();
   const [editing, setEditing] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -21,7 +21,17 @@ export function MatCell({ piece, pieces, onSave }: { piece: Piece; pieces: Piece
   if (!canEdit) return shown;
   if (!editing)
     return (
-      <button ref={button} type="button" aria-label={`Edit what ${piece.name} sits on`} onClick={() => { setError(null); setEditing(true); }} className="-mx-1 block w-[calc(100%+0.5rem)] rounded px-1 py-0.5 text-left hover:bg-kraft-light/60">
+      <button
+        ref={button}
+        type="button"
+        // The shown words end the name, so speech users can say what they see (WCAG 2.5.3).
+        aria-label={`Edit what ${piece.name} sits on: ${base ? `on ${base.name}` : 'nothing'}`}
+        onClick={() => {
+          setError(null);
+          setEditing(true);
+        }}
+        className="-mx-1 block w-[calc(100%+0.5rem)] rounded px-1 py-0.5 text-left hover:bg-kraft-light/60"
+      >
         {shown}
       </button>
     );
@@ -34,7 +44,7 @@ export function MatCell({ piece, pieces, onSave }: { piece: Piece; pieces: Piece
       <select
         ref={select}
         aria-label={`${piece.name} sits on`}
-        className="w-full rounded border border-line bg-white px-1 py-0.5 text-sm"
+        className="w-full rounded border border-field bg-white px-1 py-0.5 text-sm"
         defaultValue={piece.matOnId ?? ''}
         disabled={saving}
         onKeyDown={(e) => e.key === 'Escape' && (e.preventDefault(), done())}
@@ -61,55 +71,28 @@ export function MatCell({ piece, pieces, onSave }: { piece: Piece; pieces: Piece
             </option>
           ))}
       </select>
-      {error && <p role="alert" className="text-xs text-rosehip">{error}</p>}
-    </div>
-  );
-}
-
-/** A rectangle or a circle; one click turns it (a circle keeps its diameter as both sides). */
-export function ShapeCell({ piece, onSave }: { piece: Piece; onSave: (shape: Piece['shape']) => Promise<unknown> }) {
-  const { canEdit } = useCutList();
-  const [error, setError] = useState<string | null>(null);
-  const [saving, setSaving] = useState(false);
-  const word = piece.shape === 'circle' ? 'Circle' : 'Rectangle';
-  const icon = piece.shape === 'circle' ? <span aria-hidden className="inline-block h-3.5 w-3.5 rounded-full border-[1.5px] border-current" /> : <span aria-hidden className="inline-block h-3 w-4 border-[1.5px] border-current" />;
-  if (!canEdit) return <span className="inline-flex items-center gap-1" title={word}>{icon}<span className="sr-only">{word}</span></span>;
-  const other = piece.shape === 'circle' ? 'rect' : 'circle';
-  return (
-    <div>
-      <button
-        type="button"
-        title={`${word}: click to make it a ${other === 'circle' ? 'circle' : 'rectangle'}`}
-        aria-label={`${piece.name} is a ${word.toLowerCase()}; make it a ${other === 'circle' ? 'circle' : 'rectangle'}`}
-        disabled={saving}
-        className="inline-flex h-7 w-7 items-center justify-center rounded text-ink hover:bg-kraft-light"
-        onClick={async () => {
-          setSaving(true);
-          setError(null);
-          try {
-            await onSave(other);
-          } catch (e) {
-            setError(saveErrorText(e));
-          } finally {
-            setSaving(false);
-          }
-        }}
-      >
-        {icon}
-      </button>
-      {error && <p role="alert" className="text-xs text-rosehip">{error}</p>}
+      {error && (
+        <p role="alert" className="text-xs text-rosehip">
+          {error}
+        </p>
+      )}
     </div>
   );
 }
 
 /** The time a piece was said, opening the Footage section there. */
-export function SaidAtCell({ piece }: { piece: Piece }) {
+export function SaidAtCell({ piece }: { piece: PieceDto }) {
   const { footageAt } = useCutList();
   const navigate = useNavigate();
   if (piece.saidAtMs === null) return <span className="text-pencil">—</span>;
   const t = formatTimestamp(piece.saidAtMs);
   return (
-    <button type="button" className="font-mono text-xs text-kraft-dark underline decoration-dotted underline-offset-2 hover:text-ink" aria-label={`Said at ${t}: open the footage there`} onClick={() => navigate(footageAt(piece.saidAtMs!))}>
+    <button
+      type="button"
+      className="font-mono text-xs text-kraft-dark underline decoration-dotted underline-offset-2 hover:text-ink"
+      aria-label={`Said at ${t}: open the footage there`}
+      onClick={() => navigate(footageAt(piece.saidAtMs!))}
+    >
       {t}
     </button>
   );

@@ -1,19 +1,18 @@
-import { Fragment, useMemo, useState } from 'react';
+import { Fragment, useCallback, useMemo, useState } from 'react';
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable } from '@tanstack/react-table';
-import { updatePieceSchema, type UpdatePieceInput } from '@shared/schemas/piece';
-import { Button } from '@/components/ui/button';
+import { updatePieceSchema, type UpdatePieceInput, type MaterialDto, type PieceDto } from '@shared/schemas/piece';
 import { ConfirmDialog } from '@/components/ui/confirm';
 import { Notice } from '@/components/ui/notice';
 import { pieceChange, useDeletePiece, useMovePiece, useUpdatePiece } from '../api/piece-mutations';
-import type { Material, Piece } from '../api/types';
 import { useCutList } from './cut-list-context';
 import { EditableCell } from './editable-cell';
 import { LengthText } from './length-text';
-import { MatCell, SaidAtCell, ShapeCell } from './piece-cells';
+import { MatCell, SaidAtCell } from './piece-cells';
 import { PieceChecks } from './piece-checks';
 import { ScoreLinesCell } from './score-lines-cell';
+import { GrainCell, isRoundShape, ShapeCell, ShapeSizesLine } from './shape-fields';
 
-const col = createColumnHelper<Piece>();
+const col = createColumnHelper<PieceDto>();
 
 /** The schema's own message for one field, so the table refuses what the server would. */
 function fieldProblem(change: UpdatePieceInput): string | null {
@@ -22,7 +21,7 @@ function fieldProblem(change: UpdatePieceInput): string | null {
 }
 
 /** A piece's notes (notches, tabs, grain) on the line under it, edited like any cell. */
-function NotesLine({ piece, onSave }: { piece: Piece; onSave: (notes: string) => Promise<unknown> }) {
+function NotesLine({ piece, onSave }: { piece: PieceDto; onSave: (notes: string) => Promise<unknown> }) {
   const { canEdit } = useCutList();
   if (!canEdit && !piece.notes) return null;
   return (
@@ -43,13 +42,13 @@ function NotesLine({ piece, onSave }: { piece: Piece; onSave: (notes: string) =>
 }
 
 /** The cut list as a table: click a cell to change it; checks sit under each piece. */
-export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials: Material[] }) {
+export function PiecesTable({ pieces, materials }: { pieces: PieceDto[]; materials: MaterialDto[] }) {
   const { tutorialId, canEdit } = useCutList();
-  const update = useUpdatePiece(tutorialId);
-  const move = useMovePiece(tutorialId);
+  const { mutateAsync: updateAsync } = useUpdatePiece(tutorialId);
+  const { mutate: movePiece, isPending: moving, error: moveError } = useMovePiece(tutorialId);
   const remove = useDeletePiece(tutorialId);
-  const [deleting, setDeleting] = useState<Piece | null>(null);
-  const save = (p: Piece, change: UpdatePieceInput) => update.mutateAsync({ id: p.id, ...pieceChange(p, change) });
+  const [deleting, setDeleting] = useState<PieceDto | null>(null);
+  const save = useCallback((p: PieceDto, change: UpdatePieceInput) => updateAsync({ id: p.id, ...pieceChange(p, change) }), [updateAsync]);
   const listId = `materials-${tutorialId}`;
 
   const columns = useMemo(
@@ -63,11 +62,23 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
           if (!canEdit) return <span className="text-xs text-pencil">{i + 1}</span>;
           return (
             <div className="flex flex-col items-center">
-              <button type="button" className="rounded px-1 text-xs leading-none text-pencil hover:bg-kraft-light hover:text-ink disabled:opacity-30" aria-label={`Move ${p.name} up`} disabled={i === 0 || move.isPending} onClick={() => move.mutate({ pieces, id: p.id, by: -1 })}>
+              <button
+                type="button"
+                className="rounded px-1 text-xs leading-none text-pencil hover:bg-kraft-light hover:text-ink disabled:opacity-30"
+                aria-label={`Move ${p.name} up`}
+                disabled={i === 0 || moving}
+                onClick={() => movePiece({ pieces, id: p.id, by: -1 })}
+              >
                 ▲
               </button>
               <span className="text-xs text-pencil">{i + 1}</span>
-              <button type="button" className="rounded px-1 text-xs leading-none text-pencil hover:bg-kraft-light hover:text-ink disabled:opacity-30" aria-label={`Move ${p.name} down`} disabled={i === pieces.length - 1 || move.isPending} onClick={() => move.mutate({ pieces, id: p.id, by: 1 })}>
+              <button
+                type="button"
+                className="rounded px-1 text-xs leading-none text-pencil hover:bg-kraft-light hover:text-ink disabled:opacity-30"
+                aria-label={`Move ${p.name} down`}
+                disabled={i === pieces.length - 1 || moving}
+                onClick={() => movePiece({ pieces, id: p.id, by: 1 })}
+              >
                 ▼
               </button>
             </div>
@@ -78,7 +89,15 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
         header: 'Name',
         cell: ({ row }) => {
           const p = row.original;
-          return <EditableCell label={`name of ${p.name}`} initial={p.name} display={<span className="font-medium">{p.name}</span>} validate={(t) => fieldProblem({ name: t })} onSave={(t) => save(p, { name: t })} />;
+          return (
+            <EditableCell
+              label={`name of ${p.name}`}
+              initial={p.name}
+              display={<span className="font-medium">{p.name}</span>}
+              validate={(t) => fieldProblem({ name: t })}
+              onSave={(t) => save(p, { name: t })}
+            />
+          );
         },
       }),
       col.accessor('material', {
@@ -98,7 +117,11 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
         },
       }),
       col.accessor('quantity', {
-        header: () => <abbr title="Quantity" className="no-underline">Qty</abbr>,
+        header: () => (
+          <abbr title="Quantity" className="no-underline">
+            Qty
+          </abbr>
+        ),
         cell: ({ row }) => {
           const p = row.original;
           return (
@@ -122,7 +145,7 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
         header: 'Width / ⌀',
         cell: ({ row }) => {
           const p = row.original;
-          const circle = p.shape === 'circle';
+          const circle = isRoundShape(p.shape);
           return (
             <EditableCell
               kind="length"
@@ -139,8 +162,16 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
         header: 'Length',
         cell: ({ row }) => {
           const p = row.original;
-          if (p.shape === 'circle') return <span className="text-xs text-pencil">circle</span>;
-          return <EditableCell kind="length" label={`length of ${p.name}`} initial={p.height.display} display={<LengthText value={p.height} stacked />} onSave={(t) => save(p, { height: t })} />;
+          if (isRoundShape(p.shape)) return <span className="text-xs text-pencil">round</span>;
+          return (
+            <EditableCell
+              kind="length"
+              label={`length of ${p.name}`}
+              initial={p.height.display}
+              display={<LengthText value={p.height} stacked />}
+              onSave={(t) => save(p, { height: t })}
+            />
+          );
         },
       }),
       col.display({
@@ -158,30 +189,64 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
         header: () => <span className="sr-only">Actions</span>,
         cell: ({ row }) =>
           canEdit ? (
-            <button type="button" className="rounded px-1.5 py-0.5 text-xs text-rosehip hover:bg-rosehip-light" aria-label={`Delete ${row.original.name}`} onClick={() => setDeleting(row.original)}>
+            <button
+              type="button"
+              className="rounded px-1.5 py-0.5 text-xs text-rosehip hover:bg-rosehip-light"
+              aria-label={`Delete ${row.original.name}`}
+              onClick={() => setDeleting(row.original)}
+            >
               Delete
             </button>
           ) : null,
       }),
     ],
     // The cells read the list for mats and moves; the mutations' functions are stable.
-    [pieces, canEdit, move.isPending, listId],
+    [pieces, canEdit, moving, movePiece, save, listId],
   );
 
   const table = useReactTable({ data: pieces, columns, getCoreRowModel: getCoreRowModel(), getRowId: (p) => p.id });
   // Notes are free sentences, so they get the full width of the line under the piece instead of a column.
-  const widths: Record<string, string> = { order: 'w-8', name: 'w-[17%]', material: 'w-[13%]', quantity: 'w-10', shape: 'w-9', width: 'w-[5.75rem]', height: 'w-[5.75rem]', scoreLines: 'w-[15%]', matOnId: 'w-[12%]', saidAtMs: 'w-12', actions: 'w-14' };
+  // Column names beside the values when a phone shows each piece as a card (.stack-table).
+  const labels: Record<string, string> = {
+    order: 'Order',
+    name: 'Name',
+    material: 'Material',
+    quantity: 'Quantity',
+    shape: 'Shape',
+    width: 'Width / ⌀',
+    height: 'Length',
+    scoreLines: 'Score lines',
+    matOnId: 'Mat',
+    saidAtMs: 'Said',
+  };
+  const widths: Record<string, string> = {
+    order: 'w-8',
+    name: 'w-[17%]',
+    material: 'w-[13%]',
+    quantity: 'w-10',
+    shape: 'w-9',
+    width: 'w-[5.75rem]',
+    height: 'w-[5.75rem]',
+    scoreLines: 'w-[15%]',
+    matOnId: 'w-[12%]',
+    saidAtMs: 'w-12',
+    actions: 'w-14',
+  };
 
   return (
     <div>
-      {move.error && <div className="mb-2"><Notice kind="error">{move.error.message}</Notice></div>}
+      {moveError && (
+        <div className="mb-2">
+          <Notice kind="error">{moveError.message}</Notice>
+        </div>
+      )}
       <datalist id={listId}>
         {materials.map((m) => (
           <option key={m.id} value={m.name} />
         ))}
       </datalist>
-      <div className="rounded-lg border border-line bg-white">
-        <table className="w-full table-fixed text-sm">
+      <div className="sm:rounded-lg sm:border sm:border-line sm:bg-white">
+        <table className="stack-table w-full table-fixed text-sm">
           <thead className="text-left text-xs text-pencil">
             {table.getHeaderGroups().map((g) => (
               <tr key={g.id} className="border-b border-line">
@@ -196,16 +261,20 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
           <tbody>
             {table.getRowModel().rows.map((row) => (
               <Fragment key={row.id}>
-                <tr className="border-t border-line align-top first:border-t-0" aria-label={row.original.name}>
+                <tr className="stack-more-above border-t border-line align-top first:border-t-0" aria-label={row.original.name}>
                   {row.getVisibleCells().map((c) => (
-                    <td key={c.id} className="px-1.5 pt-2 pb-1">
+                    <td key={c.id} className="px-1.5 pt-2 pb-1" data-label={labels[c.column.id]}>
                       {flexRender(c.column.columnDef.cell, c.getContext())}
                     </td>
                   ))}
                 </tr>
-                <tr>
+                <tr className="stack-more">
                   <td />
                   <td colSpan={row.getVisibleCells().length - 1} className="space-y-1 px-2 pb-2.5">
+                    <div className="flex flex-wrap items-start gap-x-4 gap-y-1 text-xs">
+                      <GrainCell piece={row.original} onSave={(grain) => save(row.original, { grain })} />
+                      <ShapeSizesLine piece={row.original} onSave={(params) => save(row.original, { params })} />
+                    </div>
                     <NotesLine piece={row.original} onSave={(notes) => save(row.original, { notes })} />
                     <PieceChecks checks={row.original.checks} />
                   </td>
@@ -228,7 +297,11 @@ export function PiecesTable({ pieces, materials }: { pieces: Piece[]; materials:
         onConfirm={() => deleting && remove.mutate(deleting.id, { onSuccess: () => setDeleting(null) })}
       >
         <p>The piece leaves the cut list, the sheet plan and the handout. Mats that sat on it stop sitting on anything.</p>
-        {remove.error && <div className="mt-2"><Notice kind="error">{remove.error.message}</Notice></div>}
+        {remove.error && (
+          <div className="mt-2">
+            <Notice kind="error">{remove.error.message}</Notice>
+          </div>
+        )}
       </ConfirmDialog>
     </div>
   );

@@ -37,7 +37,12 @@ export function ToolTabs({ tabs, label }: { tabs: { key: string; label: string; 
           </button>
         ))}
       </div>
-      <div role="tabpanel" id={`${base}-${active}-panel`} aria-labelledby={`${base}-${active}-tab`} className="rounded-b-lg border border-t-0 border-line bg-white p-4">
+      <div
+        role="tabpanel"
+        id={`${base}-${active}-panel`}
+        aria-labelledby={`${base}-${active}-tab`}
+        className="rounded-b-lg border border-t-0 border-line bg-white p-4"
+      >
         {current.panel()}
       </div>
     </div>

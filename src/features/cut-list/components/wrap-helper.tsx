@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { formatLength, formatMm, readLength } from '@shared/measure';
 import { TextField } from '@/components/ui/field';
-import { runWrap, type WrapForm } from '../utils/helpers';
+import { runWrap, wrapNote, type WrapForm } from '../utils/helpers';
 import { useCutList } from './cut-list-context';
 import { AddAsPiece, HelperLength, Working } from './helper-parts';
 import { LengthPreview } from './length-text';
@@ -19,13 +19,21 @@ export function WrapHelper() {
   return (
     <div>
       <p className="text-sm text-pencil">
-        How long to cut the strip that wraps a circle (a box wall, a lid rim): π × (diameter + paper thickness) shared by the strips, plus the overlap, rounded up to the next 1/{precision} in mark. Cut long: a long strip only overlaps more, a short one leaves a gap.
+        How long to cut the strip that wraps a circle (a box wall, a lid rim): π × (diameter + paper thickness) shared by the strips, plus the overlap, rounded
+        up to the next 1/{precision} in mark. Cut long: a long strip only overlaps more, a short one leaves a gap.
       </p>
       <div className="mt-3 grid grid-cols-4 gap-3">
         <HelperLength label="Diameter" placeholder="e.g. 6 3/8" value={f.diameter} onChange={set('diameter')} error={errors.diameter} />
         <TextField label="Number of strips" inputMode="numeric" value={f.strips} onChange={(e) => set('strips')(e.target.value)} error={errors.strips} />
         <HelperLength label="Overlap per strip" placeholder="e.g. 1/2" value={f.overlap} onChange={set('overlap')} error={errors.overlap} />
-        <HelperLength label="Paper thickness (optional)" placeholder="e.g. 0.3 mm" value={f.thickness} onChange={set('thickness')} error={errors.thickness} hint="caliper; 100 lb cover is about 0.011 in" />
+        <HelperLength
+          label="Paper thickness (optional)"
+          placeholder="e.g. 0.3 mm"
+          value={f.thickness}
+          onChange={set('thickness')}
+          error={errors.thickness}
+          hint="caliper; 100 lb cover is about 0.011 in"
+        />
       </div>
       {r.ok ? (
         <div className="mt-4">
@@ -33,7 +41,8 @@ export function WrapHelper() {
             lines={r.result.working}
             result={
               <p>
-                Cut {strips > 1 ? `${strips} strips` : 'the strip'} <strong>{formatLength(r.result.stripLength)}</strong> <span className="text-sm text-pencil">{formatMm(r.result.stripLength)}</span> long
+                Cut {strips > 1 ? `${strips} strips` : 'the strip'} <strong>{formatLength(r.result.stripLength)}</strong>{' '}
+                <span className="text-sm text-pencil">{formatMm(r.result.stripLength)}</span> long
               </p>
             }
           />
@@ -54,7 +63,7 @@ export function WrapHelper() {
                 shape: 'rect',
                 width: formatLength(r.result.stripLength),
                 height: wall,
-                notes: `Wraps a ${f.diameter.trim()} circle${strips > 1 ? ` in ${strips} strips` : ''}${f.overlap.trim() ? ` with ${f.overlap.trim()} overlap each` : ''}`,
+                notes: wrapNote(f, { unit: defaultUnit, precision }),
               };
             }}
           />

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { unit } from 'mathjs';
 import { readTyped, showLength } from './lengths';
-import type { LengthDto } from '../api/types';
+import type { LengthDto } from '@shared/schemas/piece';
 
 const dto = (value: string): LengthDto => ({ value, inches: 0, mm: 0, display: '', mmDisplay: '' });
 
@@ -52,5 +52,16 @@ describe('showLength', () => {
     expect(showLength(dto('13 mm'), 'both')).toEqual({ primary: '13 mm', secondary: '≈ 1/2 in' });
     // at 1/32 the nearest mark of 0.5118 in is 16/32 = 1/2 still; at 1/8 also 1/2
     expect(showLength(dto('13 mm'), 'in', 32).primary).toBe('≈ 1/2 in');
+  });
+});
+
+describe('bounds in the preview', () => {
+  it('says “-3 in” is negative rather than previewing 3 in; zero and past 10 m are refused too', () => {
+    expect(readTyped('-3 in')).toEqual({ state: 'error', message: 'A length cannot be negative; leave out the minus sign' });
+    expect(readTyped('0')).toEqual({ state: 'error', message: 'Enter a length above zero' });
+    const far = readTyped('400');
+    expect(far.state === 'error' && far.message).toMatch(/at most 10 m/);
+    // In a metric tutorial the same bare number is 400 mm.
+    expect(readTyped('400', 'mm').state).toBe('ok');
   });
 });

@@ -1,11 +1,8 @@
-import { displayLength, formatMm, parseStoredLength, readLength, type Length, type LengthUnit, type RulerPrecision } from '@shared/measure';
-import type { LengthDto } from '../api/types';
+import { displayLength, formatMm, parseStoredLength, readBoundedLength, type Length, type LengthUnit, type RulerPrecision } from '@shared/measure';
+import type { LengthDto } from '@shared/schemas/piece';
 
 /** What a length field has read so far from the typed text. */
-export type TypedLength =
-  | { state: 'empty' }
-  | { state: 'error'; message: string }
-  | { state: 'ok'; length: Length; approx: boolean; preview: string };
+export type TypedLength = { state: 'empty' } | { state: 'error'; message: string } | { state: 'ok'; length: Length; approx: boolean; preview: string };
 
 /** Which system the cut list shows: the crafter's own inches, millimetres, or both side by side. */
 export type UnitsMode = 'in' | 'mm' | 'both';
@@ -16,8 +13,9 @@ export type UnitsMode = 'in' | 'mm' | 'both';
  */
 export function readTyped(text: string, defaultUnit: LengthUnit = 'in', precision: RulerPrecision = 16): TypedLength {
   if (text.trim() === '') return { state: 'empty' };
-  const r = readLength(text, { defaultUnit });
-  if (!r) return { state: 'error', message: `Could not read “${text.trim()}” as a length; try “4 1/4”, “ten and a half” or “108 mm”` };
+  // The same reading and bounds as the server: "-3 in" is refused in words, never shown as 3 in.
+  const r = readBoundedLength(text, { defaultUnit });
+  if (!r.ok) return { state: 'error', message: r.message };
   const d = displayLength(r.length, precision);
   return { state: 'ok', length: r.length, approx: r.approx, preview: `→ ${d.primary} · ${d.secondary}` };
 }

@@ -1,8 +1,7 @@
-import type { CreatePieceInput } from '@shared/schemas/piece';
+import type { CreatePieceInput, LengthDto, MentionDto, PieceProposalDto } from '@shared/schemas/piece';
 import { formatTimestamp } from '@shared/transcript/timestamp';
-import type { MentionDto } from '../api/types';
 
-const KIND_NAME: Record<MentionDto['kind'], string> = { size: 'Piece', diameter: 'Circle', length: 'Strip', score: 'Piece' };
+const KIND_NAME: Record<MentionDto['kind'], string> = { size: 'Piece', diameter: 'Circle', length: 'Strip', score: 'Piece', range: 'Piece' };
 
 /** A starting name for a piece made from a mention; the crafter renames it in the table. */
 export function nameFromMention(m: MentionDto): string {
@@ -12,21 +11,39 @@ export function nameFromMention(m: MentionDto): string {
 /**
  * What "Make a piece" does with a mention: a size or a diameter is a whole piece at once;
  * a single length only gives one side, so it opens the add form with the width filled in;
- * a score list is not a piece (it only adds score lines to one). Lengths sent straight to the
- * server go in their exact stored form; the form shows the crafter's written form.
+ * a score list is not a piece (it only adds score lines to one), and neither is a range: the
+ * crafter picks one of its ends (`pickFromRange`). A count said before it ("three 4 by 6 mats")
+ * is the quantity. Lengths sent straight to the server go in their exact stored form; the form
+ * shows the crafter's written form.
  */
 export function makeFromMention(m: MentionDto): { kind: 'create'; piece: CreatePieceInput } | { kind: 'prefill'; piece: Partial<CreatePieceInput> } | null {
   const [a, b] = m.values;
   if (!a) return null;
-  const said = { name: nameFromMention(m), saidAtMs: m.startMs };
-  if (m.kind === 'size' && b) return { kind: 'create', piece: { ...said, shape: 'rect', width: a.value, height: b.value, notes: m.approx ? `Said as “${m.text}”` : '' } };
+  const said = { name: nameFromMention(m), saidAtMs: m.startMs, ...(m.count ? { quantity: m.count } : {}) };
+  if (m.kind === 'size' && b)
+    return { kind: 'create', piece: { ...said, shape: 'rect', width: a.value, height: b.value, notes: m.approx ? `Said as “${m.text}”` : '' } };
   if (m.kind === 'diameter') return { kind: 'create', piece: { ...said, shape: 'circle', width: a.value, notes: m.approx ? `Said as “${m.text}”` : '' } };
   if (m.kind === 'length') return { kind: 'prefill', piece: { ...said, shape: 'rect', width: a.display } };
   return null;
 }
 
-/** The score lines a mention adds to a piece: every value of a score list, or the one length. */
-export function scoreLinesFromMention(m: MentionDto, axis: 'width' | 'height'): { axis: 'width' | 'height'; at: string }[] {
-  if (m.kind !== 'score' && m.kind !== 'length') return [];
-  return m.values.map((v) => ({ axis, at: v.value }));
+/** A range's end the crafter chose, in the add form with the range kept in the notes; never added unseen. */
+export function pickFromRange(m: MentionDto, end: LengthDto): Partial<CreatePieceInput> {
+  return {
+    name: nameFromMention(m),
+    saidAtMs: m.startMs,
+    shape: 'rect',
+    width: end.display,
+    notes: `Said as a range: “${m.text}”`,
+    ...(m.count ? { quantity: m.count } : {}),
+  };
+}
+
+/** A proposed piece in a line: "“Wall strip”, kraft cardstock, × 2: 10 9/16 in × 2 1/2 in, score at 1/2 in". */
+export function proposalSummary(p: PieceProposalDto): string {
+  const size = p.shape === 'circle' ? `a circle ${p.width.display} across` : `${p.width.display} × ${p.height.display}`;
+  const parts = [`“${p.name}”`, p.material || 'material to pick'];
+  if (p.quantity > 1) parts.push(`× ${p.quantity}`);
+  const score = p.scoreLines.length > 0 ? `, score at ${p.scoreLines.map((s) => s.at.display).join(', ')}` : '';
+  return `${parts.join(', ')}: ${size}${score}`;
 }

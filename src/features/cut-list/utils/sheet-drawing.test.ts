@@ -1,13 +1,36 @@
 import { describe, expect, it } from 'vitest';
-import { labelSize, placementsBySheet } from './sheet-drawing';
-import type { PlacementDto } from '../api/types';
+import { blockCells, labelSize, patternLabel } from './sheet-drawing';
 
-const at = (sheet: number, name: string, width = 4, height = 4): PlacementDto => ({ sheet, name, x: 0, y: 0, width, height, rotated: false, shape: 'rect' });
+describe('blockCells', () => {
+  it('spreads a block of 3 x 2 tags one tag width and height apart', () => {
+    const cells = blockCells({
+      name: 'tag',
+      x: 1,
+      y: 0.5,
+      width: 2,
+      height: 3.5,
+      rotated: false,
+      shape: 'rect',
+      outline: null,
+      grain: 'any',
+      across: 3,
+      down: 2,
+    });
+    expect(cells.map((c) => [c.x, c.y])).toEqual([
+      [1, 0.5],
+      [3, 0.5],
+      [5, 0.5],
+      [1, 4],
+      [3, 4],
+      [5, 4],
+    ]);
+  });
+});
 
-describe('placementsBySheet', () => {
-  it('groups placements by sheet and keeps empty sheets', () => {
-    const r = placementsBySheet([at(0, 'a'), at(2, 'b'), at(0, 'c')], 3);
-    expect(r.map((s) => s.map((p) => p.name))).toEqual([['a', 'c'], [], ['b']]);
+describe('patternLabel', () => {
+  it('names one sheet or a run of alike sheets', () => {
+    expect(patternLabel(3, 1)).toBe('Sheet 3');
+    expect(patternLabel(1, 7)).toBe('Sheets 1–7');
   });
 });
 

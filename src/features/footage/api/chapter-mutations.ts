@@ -1,13 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { footageKeys } from './keys';
-import type { Chapter } from './types';
+import type { ChapterDto, CreateChapterInput, UpdateChapterInput } from '@shared/schemas/footage';
 
-type ChapterChange = { title?: string; startMs?: number };
-
-export const createChapter = ({ recordingId, ...input }: { recordingId: string; title: string; startMs: number }) =>
-  api<Chapter>(`/recordings/${recordingId}/chapters`, { method: 'POST', body: input });
-export const updateChapter = ({ id, ...input }: ChapterChange & { id: string }) => api<Chapter>(`/chapters/${id}`, { method: 'PATCH', body: input });
+export const createChapter = ({ recordingId, ...input }: CreateChapterInput & { recordingId: string }) =>
+  api<ChapterDto>(`/recordings/${recordingId}/chapters`, { method: 'POST', body: input });
+export const updateChapter = ({ id, ...input }: UpdateChapterInput & { id: string }) => api<ChapterDto>(`/chapters/${id}`, { method: 'PATCH', body: input });
 export const deleteChapter = (id: string) => api<void>(`/chapters/${id}`, { method: 'DELETE' });
 
 // Suggestions leave out times a chapter already takes, so they change with the chapters.
@@ -20,7 +18,10 @@ const invalidate = (qc: ReturnType<typeof useQueryClient>, recordingId: string) 
 /** Adds a chapter to the recording. */
 export function useCreateChapter(recordingId: string) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: (input: { title: string; startMs: number }) => createChapter({ recordingId, ...input }), onSuccess: () => invalidate(qc, recordingId) });
+  return useMutation({
+    mutationFn: (input: { title: string; startMs: number }) => createChapter({ recordingId, ...input }),
+    onSuccess: () => invalidate(qc, recordingId),
+  });
 }
 
 /** Renames or retimes a chapter; the list shows the change before the refetch lands. */
@@ -29,7 +30,7 @@ export function useUpdateChapter(recordingId: string) {
   return useMutation({
     mutationFn: updateChapter,
     onSuccess: (c) => {
-      qc.setQueryData(footageKeys.chapters(recordingId), (old: { chapters: Chapter[] } | undefined) =>
+      qc.setQueryData(footageKeys.chapters(recordingId), (old: { chapters: ChapterDto[] } | undefined) =>
         old ? { chapters: old.chapters.map((x) => (x.id === c.id ? c : x)).sort((a, b) => a.startMs - b.startMs) } : old,
       );
       return invalidate(qc, recordingId);

@@ -1,11 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { footageKeys } from './keys';
-import type { ChapterSuggestion } from './types';
+import type { ChapterSuggestionsDto } from '@shared/schemas/footage';
 
 /** Chapters the transcript's own cue phrases suggest, minus times already taken by a chapter. */
-export const getChapterSuggestions = (recordingId: string) =>
-  api<{ suggestions: ChapterSuggestion[] }>(`/recordings/${recordingId}/chapter-suggestions`);
+export const getChapterSuggestions = (recordingId: string) => api<ChapterSuggestionsDto>(`/recordings/${recordingId}/chapter-suggestions`);
 export const chapterSuggestionsQueryOptions = (recordingId: string) =>
   queryOptions({ queryKey: footageKeys.chapterSuggestions(recordingId), queryFn: () => getChapterSuggestions(recordingId) });
 export const useChapterSuggestions = (recordingId: string, opts: { enabled?: boolean } = {}) =>

@@ -1,12 +1,12 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { footageKeys } from './keys';
-import type { Cue } from './types';
+import type { CuesDto } from '@shared/schemas/footage';
 
 /** The transcript's cues in order; `q` narrows them on the server (case-insensitive substring). */
 export function getCues(recordingId: string, q = '') {
   const qs = q.trim() ? `?q=${encodeURIComponent(q.trim())}` : '';
-  return api<{ cues: Cue[] }>(`/recordings/${recordingId}/cues${qs}`);
+  return api<CuesDto>(`/recordings/${recordingId}/cues${qs}`);
 }
 export const cuesQueryOptions = (recordingId: string, q = '') =>
   queryOptions({ queryKey: footageKeys.cues(recordingId, q.trim()), queryFn: () => getCues(recordingId, q) });

@@ -1,12 +1,12 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { footageKeys } from './keys';
-import type { Recording } from './types';
+import type { RecordingDto } from '@shared/schemas/footage';
 
-const working = (r: Recording | undefined) => r?.status === 'uploaded' || r?.status === 'processing';
+const working = (r: RecordingDto | undefined) => r?.status === 'uploaded' || r?.status === 'processing';
 
 /** One recording with the caller's abilities. */
-export const getRecording = (id: string) => api<Recording>(`/recordings/${id}`);
+export const getRecording = (id: string) => api<RecordingDto>(`/recordings/${id}`);
 
 /** Polls every second while the server is still preparing the footage, then stops. */
 export const recordingQueryOptions = (id: string) =>
@@ -16,4 +16,3 @@ export const recordingQueryOptions = (id: string) =>
     refetchInterval: (query) => (working(query.state.data) ? 1000 : false),
     staleTime: 0,
   });
-export const useRecording = (id: string) => useQuery(recordingQueryOptions(id));

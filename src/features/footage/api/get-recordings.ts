@@ -1,10 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
-import { footageKeys } from './keys';
-import type { Recording } from './types';
+import { useQuery } from '@tanstack/react-query';
+import { recordingsQueryOptions } from '@/lib/resources';
 
-/** A tutorial's recordings, newest first. */
-export const getRecordings = (tutorialId: string) => api<{ recordings: Recording[] }>(`/tutorials/${tutorialId}/recordings`);
-export const recordingsQueryOptions = (tutorialId: string) =>
-  queryOptions({ queryKey: footageKeys.tutorialRecordings(tutorialId), queryFn: () => getRecordings(tutorialId) });
+/** A tutorial's recordings, newest first (the shared read the write-up's still picker uses too). */
 export const useRecordings = (tutorialId: string) => useQuery(recordingsQueryOptions(tutorialId));

@@ -1,10 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
-import { footageKeys } from './keys';
-import type { Still } from './types';
+import { useQuery } from '@tanstack/react-query';
+import { stillsQueryOptions } from '@/lib/resources';
 
-/** A recording's stills in time order. */
-export const getStills = (recordingId: string) => api<{ stills: Still[] }>(`/recordings/${recordingId}/stills`);
-export const stillsQueryOptions = (recordingId: string) =>
-  queryOptions({ queryKey: footageKeys.stills(recordingId), queryFn: () => getStills(recordingId) });
+/** A recording's stills in time order (the shared read the write-up's still picker uses too). */
 export const useStills = (recordingId: string) => useQuery(stillsQueryOptions(recordingId));

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CreateStillInput } from '@shared/schemas/footage';
+import type { CreateStillInput, StillDto } from '@shared/schemas/footage';
 import { api } from '@/lib/api-client';
 import { footageKeys } from './keys';
-import type { Still } from './types';
 
 export const createStill = ({ recordingId, ...input }: CreateStillInput & { recordingId: string }) =>
-  api<Still>(`/recordings/${recordingId}/stills`, { method: 'POST', body: input });
-export const updateStill = ({ id, ...input }: { id: string; caption?: string; alt?: string }) => api<Still>(`/stills/${id}`, { method: 'PATCH', body: input });
+  api<StillDto>(`/recordings/${recordingId}/stills`, { method: 'POST', body: input });
+export const updateStill = ({ id, ...input }: { id: string; caption?: string; alt?: string }) =>
+  api<StillDto>(`/stills/${id}`, { method: 'PATCH', body: input });
 export const deleteStill = (id: string) => api<void>(`/stills/${id}`, { method: 'DELETE' });
 
 /** Pulls a still at a time: the exact frame, or the sharpest within a second of it. */
@@ -24,7 +24,7 @@ export function useUpdateStill(recordingId: string) {
   return useMutation({
     mutationFn: updateStill,
     onSuccess: (s) => {
-      qc.setQueryData(footageKeys.stills(recordingId), (old: { stills: Still[] } | undefined) =>
+      qc.setQueryData(footageKeys.stills(recordingId), (old: { stills: StillDto[] } | undefined) =>
         old ? { stills: old.stills.map((x) => (x.id === s.id ? s : x)) } : old,
       );
       return qc.invalidateQueries({ queryKey: footageKeys.stills(recordingId) });

@@ -33,7 +33,8 @@ export function uploadFile<T>(path: string, file: File, opts: Options = {}): Upl
       req.setRequestHeader('X-CSRF-Token', token);
       req.upload.onprogress = (e) => opts.onProgress?.({ loaded: e.loaded, total: e.lengthComputable ? e.total : file.size });
       req.onabort = () => reject(new UploadCancelled());
-      req.onerror = () => reject(new ApiError(0, 'The connection to the server was lost during the upload; nothing was saved. Check your connection and try again.'));
+      req.onerror = () =>
+        reject(new ApiError(0, 'The connection to the server was lost during the upload; nothing was saved. Check your connection and try again.'));
       req.onload = () => {
         let body: Record<string, unknown> = {};
         try {
@@ -45,7 +46,9 @@ export function uploadFile<T>(path: string, file: File, opts: Options = {}): Upl
         // The session may have been renewed in another tab: fetch a fresh token once and send again.
         if (req.status === 403 && body.code === 'csrf' && !retried && !aborted) {
           setCsrfToken(null);
-          getCsrfToken().then((t) => send(t, true)).then(resolve, reject);
+          getCsrfToken()
+            .then((t) => send(t, true))
+            .then(resolve, reject);
           return;
         }
         const fallback = req.status === 413 ? 'The file is larger than the server accepts' : req.statusText || `The server answered ${req.status}`;
@@ -63,7 +66,13 @@ export function uploadFile<T>(path: string, file: File, opts: Options = {}): Upl
         if (aborted) throw new UploadCancelled();
         return send(token, false);
       })
-      .then(resolve, (e: unknown) => reject(e instanceof Error && !(e instanceof ApiError) && !(e instanceof UploadCancelled) ? new ApiError(0, 'Cannot reach the server; check your connection and try again') : e));
+      .then(resolve, (e: unknown) =>
+        reject(
+          e instanceof Error && !(e instanceof ApiError) && !(e instanceof UploadCancelled)
+            ? new ApiError(0, 'Cannot reach the server; check your connection and try again')
+            : e,
+        ),
+      );
   });
 
   return {

@@ -1,8 +1,10 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { TranscriptImportDto } from '@shared/schemas/footage';
 import { footageKeys } from './keys';
 import { uploadFile } from './upload-file';
 
-export type TranscriptUploaded = { format: string; cueCount: number; name: string };
+/** `notices`: what the reader skipped or kept with a note, each starting "line N: ". */
+export type TranscriptUploaded = TranscriptImportDto;
 
 /** Sends a transcript file (.vtt, .srt, .txt); a 422 names the line that could not be read. */
 export const uploadTranscript = ({ recordingId, file }: { recordingId: string; file: File }) =>

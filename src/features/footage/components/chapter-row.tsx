@@ -1,12 +1,11 @@
 import { memo, useEffect, useRef, useState } from 'react';
-import { createChapterSchema } from '@shared/schemas/footage';
+import { createChapterSchema, type ChapterDto } from '@shared/schemas/footage';
 import { parseTimestamp } from '@shared/transcript/timestamp';
 import { Button } from '@/components/ui/button';
-import type { Chapter } from '../api/types';
 import { formatClock } from '../utils/format';
 
 type Props = {
-  chapter: Chapter;
+  chapter: ChapterDto;
   current: boolean;
   canEdit: boolean;
   durationMs: number;
@@ -17,7 +16,7 @@ type Props = {
 };
 
 const titleSchema = createChapterSchema.shape.title;
-const inputCls = 'rounded-md border bg-white px-2 py-1 text-sm outline-none focus:border-kraft';
+const inputCls = 'rounded-md border bg-white px-2 py-1 text-sm focus:border-kraft';
 
 /**
  * One chapter: its time seeks, its title renames in place (Enter saves, Escape cancels) and
@@ -114,7 +113,12 @@ export const ChapterRow = memo(function ChapterRow({ chapter, current, canEdit, 
             className={`${inputCls} min-w-0 flex-1 ${error ? 'border-rosehip' : 'border-line'}`}
           />
         ) : canEdit ? (
-          <button type="button" onClick={() => open('rename')} className="min-w-0 flex-1 truncate rounded px-1 text-left text-sm hover:bg-kraft-light" title="Click to rename">
+          <button
+            type="button"
+            onClick={() => open('rename')}
+            className="min-w-0 flex-1 truncate rounded px-1 text-left text-sm hover:bg-kraft-light"
+            title="Click to rename"
+          >
             {chapter.title}
           </button>
         ) : (

@@ -1,12 +1,12 @@
 import { Button } from '@/components/ui/button';
-import type { ChapterSuggestion } from '../api/types';
+import type { ChapterSuggestionDto } from '@shared/schemas/footage';
 import { suggestionKey } from '../hooks/use-dismissed-suggestions';
 import { formatClock } from '../utils/format';
 
 type Props = {
-  suggestions: ChapterSuggestion[];
-  onAccept: (s: ChapterSuggestion) => void;
-  onDismiss: (s: ChapterSuggestion) => void;
+  suggestions: ChapterSuggestionDto[];
+  onAccept: (s: ChapterSuggestionDto) => void;
+  onDismiss: (s: ChapterSuggestionDto) => void;
   onSeek: (ms: number) => void;
   accepting: string | null;
 };
@@ -24,7 +24,11 @@ export function ChapterSuggestions({ suggestions, onAccept, onDismiss, onSeek, a
           return (
             <li key={key} className="rounded-md border border-dashed border-kraft/40 bg-paper px-3 py-2">
               <div className="flex items-start gap-2">
-                <button type="button" onClick={() => onSeek(s.startMs)} className="w-12 shrink-0 pt-1 text-left text-sm tabular-nums text-kraft-dark hover:underline">
+                <button
+                  type="button"
+                  onClick={() => onSeek(s.startMs)}
+                  className="w-12 shrink-0 pt-1 text-left text-sm tabular-nums text-kraft-dark hover:underline"
+                >
                   {formatClock(s.startMs)}
                 </button>
                 <span className="min-w-0 flex-1 pt-1 text-sm font-medium break-words">{s.title}</span>

@@ -1,19 +1,21 @@
 import { useCallback, useMemo, useState } from 'react';
 import { Button } from '@/components/ui/button';
+import { ConfirmDialog } from '@/components/ui/confirm';
 import { Notice } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/spinner';
 import { useDeleteChapter, useCreateChapter, useUpdateChapter } from '../api/chapter-mutations';
 import { useChapterSuggestions } from '../api/get-chapter-suggestions';
-import type { Chapter, ChapterSuggestion } from '../api/types';
+import type { ChapterDto, ChapterSuggestionDto } from '@shared/schemas/footage';
 import { suggestionKey, useDismissedSuggestions } from '../hooks/use-dismissed-suggestions';
 import { chapterIndexAt, firstChapterFix } from '../utils/chapters';
+import { formatClock } from '../utils/format';
 import { ChapterRow } from './chapter-row';
 import { ChapterSuggestions } from './chapter-suggestions';
 import { CopyChapters } from './copy-chapters';
 
 type Props = {
   recordingId: string;
-  chapters: Chapter[] | undefined;
+  chapters: ChapterDto[] | undefined;
   loadError: Error | null;
   canEdit: boolean;
   hasTranscript: boolean;
@@ -40,8 +42,10 @@ export function ChaptersPanel({ recordingId, chapters, loadError, canEdit, hasTr
   const { mutateAsync: updateAsync } = update;
   const { mutate: deleteOne } = del;
   const save = useCallback((id: string, change: { title?: string; startMs?: number }) => updateAsync({ id, ...change }), [updateAsync]);
-  const remove = useCallback((id: string) => deleteOne(id), [deleteOne]);
-  const accept = (s: ChapterSuggestion) => {
+  // Deleting asks first: the chapter's name and time go, and the write-up's steps linked to it stop following it.
+  const [deleting, setDeleting] = useState<ChapterDto | null>(null);
+  const remove = useCallback((id: string) => setDeleting(list.find((c) => c.id === id) ?? null), [list]);
+  const accept = (s: ChapterSuggestionDto) => {
     const key = suggestionKey(s);
     setAccepting(key);
     create.mutate({ title: s.title, startMs: s.startMs }, { onSettled: () => setAccepting(null) });
@@ -74,12 +78,24 @@ export function ChaptersPanel({ recordingId, chapters, loadError, canEdit, hasTr
                 <Notice>
                   <p>The first chapter should start at 0:00, so the opening seconds belong to a chapter too.</p>
                   {canEdit && fix.kind === 'move' && (
-                    <Button size="sm" variant="secondary" className="mt-2" busy={update.isPending} onClick={() => update.mutate({ id: fix.chapter, startMs: 0 })}>
+                    <Button
+                      size="sm"
+                      variant="secondary"
+                      className="mt-2"
+                      busy={update.isPending}
+                      onClick={() => update.mutate({ id: fix.chapter, startMs: 0 })}
+                    >
                       Move “{list.find((c) => c.id === fix.chapter)?.title}” to 0:00
                     </Button>
                   )}
                   {canEdit && fix.kind === 'add' && (
-                    <Button size="sm" variant="secondary" className="mt-2" busy={create.isPending} onClick={() => create.mutate({ title: 'Introduction', startMs: 0 })}>
+                    <Button
+                      size="sm"
+                      variant="secondary"
+                      className="mt-2"
+                      busy={create.isPending}
+                      onClick={() => create.mutate({ title: 'Introduction', startMs: 0 })}
+                    >
                       Add “Introduction” at 0:00
                     </Button>
                   )}
@@ -90,7 +106,7 @@ export function ChaptersPanel({ recordingId, chapters, loadError, canEdit, hasTr
           {list.length === 0 ? (
             <p className="px-4 py-4 text-sm text-pencil">
               {canEdit
-                ? 'No chapters yet. Play to where each step begins and press M (or Mark chapter under the player); the first chapter starts at 0:00.'
+                ? 'No chapters yet. Play to where each step begins and press C (or Mark chapter under the player); the first chapter starts at 0:00.'
                 : 'No chapters yet.'}
             </p>
           ) : (
@@ -126,6 +142,18 @@ export function ChaptersPanel({ recordingId, chapters, loadError, canEdit, hasTr
           )}
         </>
       )}
+      <ConfirmDialog
+        open={deleting !== null}
+        title={`Delete the chapter “${deleting?.title ?? ''}”?`}
+        confirmLabel="Delete chapter"
+        danger
+        busy={del.isPending}
+        onCancel={() => setDeleting(null)}
+        onConfirm={() => deleting && deleteOne(deleting.id, { onSettled: () => setDeleting(null) })}
+      >
+        Its name and time leave the chapter list and the video description. Stills stay. Steps of the write-up linked to it keep their time in the video (
+        {deleting ? formatClock(deleting.startMs) : ''}) and no longer follow a chapter.
+      </ConfirmDialog>
     </section>
   );
 }

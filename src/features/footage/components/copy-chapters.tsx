@@ -1,13 +1,13 @@
 import { useEffect, useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
-import type { Chapter } from '../api/types';
+import type { ChapterDto } from '@shared/schemas/footage';
 import { chapterListProblems, chapterListText } from '../utils/chapters';
 
 /**
  * Copies "0:00 Title" lines for a video description. Where the browser refuses the clipboard
  * (no permission, not a secure page) the text is shown selected, to copy by hand.
  */
-export function CopyChapters({ chapters, durationMs }: { chapters: Chapter[]; durationMs: number }) {
+export function CopyChapters({ chapters, durationMs }: { chapters: ChapterDto[]; durationMs: number }) {
   const [state, setState] = useState<'idle' | 'copied' | 'manual'>('idle');
   const area = useRef<HTMLTextAreaElement>(null);
   const text = chapterListText(chapters);
@@ -55,7 +55,7 @@ export function CopyChapters({ chapters, durationMs }: { chapters: Chapter[]; du
             aria-label="Chapter list"
             value={text}
             rows={Math.min(8, chapters.length)}
-            className="mt-1 w-full rounded-md border border-line bg-paper px-2 py-1 font-mono text-xs"
+            className="mt-1 w-full rounded-md border border-field bg-paper px-2 py-1 font-mono text-xs"
             onBlur={() => setState('idle')}
           />
         </div>

@@ -1,5 +1,5 @@
-import { memo, useEffect, useMemo, useRef } from 'react';
-import type { Cue } from '../api/types';
+import { memo, useCallback, useEffect, useMemo, useRef } from 'react';
+import type { CueDto } from '@shared/schemas/footage';
 import { splitByMatches, type CueMatch } from '../utils/cue-search';
 import { formatClock } from '../utils/format';
 
@@ -7,14 +7,21 @@ import { formatClock } from '../utils/format';
 export const USER_SCROLL_PAUSE_MS = 3000;
 
 type Props = {
-  cues: Cue[];
+  cues: CueDto[];
   active: number;
   matches: CueMatch[];
   currentMatch: number;
   onSeek: (ms: number) => void;
 };
 
-const CueRow = memo(function CueRow(props: { cue: Cue; active: boolean; matches: CueMatch[]; first: number; current: number; onSeek: (ms: number) => void }) {
+const CueRow = memo(function CueRow(props: {
+  cue: CueDto;
+  active: boolean;
+  matches: CueMatch[];
+  first: number;
+  current: number;
+  onSeek: (ms: number) => void;
+}) {
   const { cue, active, matches, first, current, onSeek } = props;
   const parts = matches.length ? splitByMatches(cue.text, matches, first) : null;
   return (
@@ -65,28 +72,31 @@ export function CueList({ cues, active, matches, currentMatch, onSeek }: Props) 
     return m;
   }, [matches]);
 
-  const scrollTo = (index: number, smooth: boolean) => {
-    const list = box.current;
-    const row = list?.querySelector<HTMLElement>(`[data-cue="${cues[index]?.position}"]`);
-    if (!list || !row) return;
-    const top = row.offsetTop;
-    const bottom = top + row.offsetHeight;
-    // Leave it be while it is comfortably on screen; otherwise bring it to a third of the way down.
-    if (top >= list.scrollTop && bottom <= list.scrollTop + list.clientHeight * 0.8) return;
-    const reduce = window.matchMedia?.('(prefers-reduced-motion: reduce)').matches;
-    list.scrollTo({ top: Math.max(0, top - list.clientHeight / 3), behavior: smooth && !reduce ? 'smooth' : 'auto' });
-  };
+  const scrollTo = useCallback(
+    (index: number, smooth: boolean) => {
+      const list = box.current;
+      const row = list?.querySelector<HTMLElement>(`[data-cue="${cues[index]?.position}"]`);
+      if (!list || !row) return;
+      const top = row.offsetTop;
+      const bottom = top + row.offsetHeight;
+      // Leave it be while it is comfortably on screen; otherwise bring it to a third of the way down.
+      if (top >= list.scrollTop && bottom <= list.scrollTop + list.clientHeight * 0.8) return;
+      const reduce = window.matchMedia?.('(prefers-reduced-motion: reduce)').matches;
+      list.scrollTo({ top: Math.max(0, top - list.clientHeight / 3), behavior: smooth && !reduce ? 'smooth' : 'auto' });
+    },
+    [cues],
+  );
 
   useEffect(() => {
     if (active < 0 || Date.now() - userScrolledAt.current < USER_SCROLL_PAUSE_MS) return;
     scrollTo(active, true);
-  }, [active]);
+  }, [active, scrollTo]);
 
   useEffect(() => {
     if (currentMatch < 0 || !matches[currentMatch]) return;
     userScrolledAt.current = Date.now();
     scrollTo(matches[currentMatch].cue, false);
-  }, [currentMatch, matches]);
+  }, [currentMatch, matches, scrollTo]);
 
   const noteUserScroll = () => {
     userScrolledAt.current = Date.now();

@@ -3,10 +3,10 @@ import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm';
 import { Notice } from '@/components/ui/notice';
 import { useDeleteRecording } from '../api/delete-recording';
-import type { Recording } from '../api/types';
+import type { RecordingDto } from '@shared/schemas/footage';
 
 /** Deletes the recording after asking, saying what goes with it. */
-export function DeleteRecordingButton({ recording, label = 'Delete recording' }: { recording: Recording; label?: string }) {
+export function DeleteRecordingButton({ recording, label = 'Delete recording' }: { recording: RecordingDto; label?: string }) {
   const [open, setOpen] = useState(false);
   const del = useDeleteRecording(recording.tutorialId);
   return (

@@ -1,11 +1,11 @@
 import { Notice } from '@/components/ui/notice';
-import type { Recording } from '../api/types';
+import type { RecordingDto } from '@shared/schemas/footage';
 import { DeleteRecordingButton } from './delete-recording-button';
 import { RecordingFacts } from './recording-facts';
 import { RecordingUpload } from './recording-upload';
 
 /** A recording the server could not prepare: why, and what to do about it. */
-export function FailedPanel({ recording, canEdit }: { recording: Recording; canEdit: boolean }) {
+export function FailedPanel({ recording, canEdit }: { recording: RecordingDto; canEdit: boolean }) {
   return (
     <section className="space-y-4" aria-labelledby="failed-title">
       <div className="rounded-lg border border-line bg-white p-6">

@@ -1,7 +1,9 @@
 import { Fragment } from 'react';
 
 const Kbd = ({ children }: { children: string }) => (
-  <kbd className="inline-block min-w-6 rounded border border-line bg-paper px-1.5 py-0.5 text-center font-sans text-xs text-ink shadow-[0_1px_0_#E6DFD3]">{children}</kbd>
+  <kbd className="inline-block min-w-6 rounded border border-line bg-paper px-1.5 py-0.5 text-center font-sans text-xs text-ink shadow-[0_1px_0_var(--palette-line)]">
+    {children}
+  </kbd>
 );
 
 // Each row: key combinations (any one of them), and what they do.
@@ -14,7 +16,7 @@ export function KeysNote({ canEdit }: { canEdit: boolean }) {
     { combos: [['←'], ['→']], what: 'Back or forward 5 seconds' },
     ...(canEdit
       ? [
-          { combos: [['M']], what: 'Mark a chapter at the playhead' },
+          { combos: [['C']], what: 'Mark a chapter at the playhead (named from the line said there)' },
           { combos: [['S']], what: 'Pull the still at the playhead' },
           { combos: [['Shift', 'S']], what: 'Pull the sharpest still nearby' },
         ]

@@ -14,7 +14,9 @@ type Props = {
   pulling: 'exact' | 'sharpest' | null;
 };
 
-const Key = ({ children }: { children: string }) => <kbd className="rounded border border-current/30 px-1 font-sans text-[10px] leading-4 opacity-70">{children}</kbd>;
+const Key = ({ children }: { children: string }) => (
+  <kbd className="rounded border border-current/30 px-1 font-sans text-[10px] leading-4 opacity-70">{children}</kbd>
+);
 
 /** Play, the playhead against the length, and the actions that use the playhead. */
 export function PlayerToolbar({ playing, timeMs, durationMs, chapterTitle, canEdit, onToggle, onMark, onPull, marking, pulling }: Props) {
@@ -45,7 +47,7 @@ export function PlayerToolbar({ playing, timeMs, durationMs, chapterTitle, canEd
       {canEdit && (
         <div className="ml-auto flex flex-wrap gap-2">
           <Button variant="secondary" size="sm" onClick={onMark} busy={marking}>
-            Mark chapter <Key>M</Key>
+            Mark chapter <Key>C</Key>
           </Button>
           <Button size="sm" onClick={() => onPull('exact')} busy={pulling === 'exact'} disabled={pulling !== null}>
             Pull still <Key>S</Key>

@@ -1,10 +1,10 @@
-import type { Recording } from '../api/types';
+import type { RecordingDto } from '@shared/schemas/footage';
 import { DeleteRecordingButton } from './delete-recording-button';
 import { ProgressBar } from './progress-bar';
 import { RecordingFacts } from './recording-facts';
 
 /** Follows the server preparing the preview, poster and thumbnails (the query polls each second). */
-export function ProcessingPanel({ recording, canEdit }: { recording: Recording; canEdit: boolean }) {
+export function ProcessingPanel({ recording, canEdit }: { recording: RecordingDto; canEdit: boolean }) {
   const stage = recording.status === 'uploaded' ? 'Waiting for the video to be picked up' : (recording.stage ?? 'Working');
   return (
     <section className="rounded-lg border border-line bg-white p-6" aria-labelledby="processing-title">
@@ -22,8 +22,8 @@ export function ProcessingPanel({ recording, canEdit }: { recording: Recording; 
         <ProgressBar percent={recording.progress} label="Preparing the footage" tone="sage" />
       </div>
       <p className="mt-3 text-sm text-pencil">
-        Cardwright is making a light preview to play in the browser, a poster and scrub thumbnails. You can leave this page; the work carries on on the
-        server and the player opens here when it is done.
+        Cardwright is making a light preview to play in the browser, a poster and scrub thumbnails. You can leave this page; the work carries on on the server
+        and the player opens here when it is done.
       </p>
       {canEdit && (
         <div className="mt-4">

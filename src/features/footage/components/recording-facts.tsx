@@ -1,8 +1,8 @@
-import type { Recording } from '../api/types';
+import type { RecordingDto } from '@shared/schemas/footage';
 import { formatBytes, formatClock } from '../utils/format';
 
 /** Name, size and, once probed, picture size, frame rate and length of a recording. */
-export function RecordingFacts({ recording: r }: { recording: Recording }) {
+export function RecordingFacts({ recording: r }: { recording: RecordingDto }) {
   const facts = [
     r.width && r.height ? `${r.width} × ${r.height}` : null,
     r.frameRate ? `${Math.round(r.frameRate * 100) / 100} fps` : null,

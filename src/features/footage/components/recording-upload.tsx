@@ -8,11 +8,11 @@ import { ProgressBar } from './progress-bar';
 
 const ACCEPT = 'video/mp4,video/quicktime,video/webm,video/x-matroska,.mp4,.mov,.webm,.mkv,.m4v';
 
-/** The recording drop zone, and the upload's progress with Cancel once a file is on its way. */
+/** The recording drop zone, and the upload's progress with Pause, Resume and Cancel once a file is on its way. */
 export function RecordingUpload({ tutorialId, replaces, lead = 'Drop the recording here or' }: { tutorialId: string; replaces?: string; lead?: string }) {
-  const { state, start, cancel, reset } = useRecordingUpload(tutorialId);
+  const { state, start, cancel, pause, resume, reset } = useRecordingUpload(tutorialId);
 
-  // Closing the tab mid-upload throws the sent part away: ask first.
+  // Closing the tab mid-upload stops it (the sent part is kept and continues when the file is chosen again): ask first.
   useEffect(() => {
     if (state.phase !== 'uploading') return;
     const warn = (e: BeforeUnloadEvent) => e.preventDefault();
@@ -20,16 +20,26 @@ export function RecordingUpload({ tutorialId, replaces, lead = 'Drop the recordi
     return () => window.removeEventListener('beforeunload', warn);
   }, [state.phase]);
 
-  if (state.phase === 'uploading') {
+  if (state.phase === 'uploading' || state.phase === 'paused') {
     const pct = percentOf(state.loaded, state.total);
     const sent = state.loaded >= state.total && state.total > 0;
+    const paused = state.phase === 'paused';
     return (
       <div className="rounded-lg border border-line bg-white p-6">
-        <div className="flex items-baseline justify-between gap-4">
-          <p className="min-w-0 truncate font-medium">Uploading “{state.fileName}”</p>
-          <Button variant="secondary" size="sm" onClick={cancel}>
-            Cancel
-          </Button>
+        <div className="flex flex-wrap items-baseline justify-between gap-4">
+          <p className="min-w-0 truncate font-medium">
+            {paused ? 'Paused' : 'Uploading'} “{state.fileName}”
+          </p>
+          <div className="flex gap-2">
+            {!sent && (
+              <Button variant="secondary" size="sm" onClick={paused ? resume : pause}>
+                {paused ? 'Resume' : 'Pause'}
+              </Button>
+            )}
+            <Button variant="secondary" size="sm" onClick={cancel}>
+              Cancel
+            </Button>
+          </div>
         </div>
         <div className="mt-3">
           <ProgressBar percent={pct} label="Upload progress" />
@@ -37,7 +47,10 @@ export function RecordingUpload({ tutorialId, replaces, lead = 'Drop the recordi
         <p className="mt-2 text-sm text-pencil tabular-nums" aria-live="polite">
           {sent ? 'Sent; the server is checking the file …' : `${pct} % · ${formatBytes(state.loaded)} of ${formatBytes(state.total)}`}
         </p>
-        <p className="mt-1 text-xs text-pencil">Keep this tab open until the upload finishes. Preparing the preview then carries on on the server.</p>
+        <p className="mt-1 text-xs text-pencil">
+          A dropped connection is retried on its own; if this tab closes, choose the same file again to continue where it stopped. Preparing the preview then
+          carries on on the server.
+        </p>
       </div>
     );
   }

@@ -74,7 +74,7 @@ export function SavedField({ label, value, check, onSave, hint, rows = 2, placeh
         }}
         onChange={(e) => setText(e.target.value)}
         onBlur={save}
-        className={`resize-y rounded-md border bg-white px-2 py-1.5 text-sm outline-none focus:border-kraft ${status === 'error' ? 'border-rosehip' : 'border-line'}`}
+        className={`resize-y rounded-md border bg-white px-2 py-1.5 text-sm focus:border-kraft ${status === 'error' ? 'border-rosehip' : 'border-field'}`}
       />
       {error ? (
         <p id={`${id}-error`} role="alert" className="text-xs text-rosehip">

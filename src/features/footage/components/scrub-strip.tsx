@@ -1,5 +1,5 @@
 import { memo, useState, type PointerEvent as ReactPointerEvent } from 'react';
-import type { Chapter, ThumbnailSheets } from '../api/types';
+import type { ChapterDto, ThumbnailSheetsDto } from '@shared/schemas/footage';
 import { useElementWidth } from '../hooks/use-element-width';
 import { formatClock } from '../utils/format';
 import { nearestThumbnail, tileBackground } from '../utils/timeline';
@@ -7,7 +7,7 @@ import { nearestThumbnail, tileBackground } from '../utils/timeline';
 const STRIP_H = 52;
 const PREVIEW_H = 90;
 
-type Props = { thumbnails: ThumbnailSheets | null; durationMs: number; timeMs: number; chapters: Chapter[]; onSeek: (ms: number) => void };
+type Props = { thumbnails: ThumbnailSheetsDto | null; durationMs: number; timeMs: number; chapters: ChapterDto[]; onSeek: (ms: number) => void };
 
 /**
  * A strip of scrub thumbnails under the player, cut from the server's sprite sheets. Hovering
@@ -71,7 +71,11 @@ export const ScrubStrip = memo(function ScrubStrip({ thumbnails, durationMs, tim
           />
         ))}
         <div className="pointer-events-none absolute inset-y-0 left-0 bg-ink/35" style={{ width: Math.max(0, xOf(timeMs)) }} aria-hidden />
-        <div className="pointer-events-none absolute inset-y-0 w-0.5 bg-kraft shadow-[0_0_0_1px_rgba(251,248,243,0.8)]" style={{ left: xOf(timeMs) - 1 }} aria-hidden />
+        <div
+          className="pointer-events-none absolute inset-y-0 w-0.5 bg-kraft shadow-[0_0_0_1px_rgba(251,248,243,0.8)]"
+          style={{ left: xOf(timeMs) - 1 }}
+          aria-hidden
+        />
         {hoverX !== null && <div className="pointer-events-none absolute inset-y-0 w-px bg-paper/80" style={{ left: hoverX }} aria-hidden />}
       </div>
       {hoverMs !== null && hoverX !== null && (

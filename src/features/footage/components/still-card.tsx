@@ -1,13 +1,12 @@
 import { memo, useState } from 'react';
-import { updateStillSchema } from '@shared/schemas/footage';
+import { updateStillSchema, type StillDto } from '@shared/schemas/footage';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm';
-import type { Still } from '../api/types';
 import { formatClock } from '../utils/format';
 import { SavedField } from './saved-field';
 
 type Props = {
-  still: Still;
+  still: StillDto;
   canEdit: boolean;
   onSeek: (ms: number) => void;
   onSave: (id: string, change: { caption?: string; alt?: string }) => Promise<unknown>;
@@ -45,12 +44,19 @@ export const StillCard = memo(function StillCard({ still, canEdit, onSeek, onSav
             {formatClock(still.atMs)}
           </button>
           <span className="truncate text-pencil tabular-nums">
-            {still.mode === 'sharpest' ? (moved ? `sharpest near ${formatClock(still.requestedMs)}` : 'sharpest nearby') : 'exact frame'} · {still.width} × {still.height}
+            {still.mode === 'sharpest' ? (moved ? `sharpest near ${formatClock(still.requestedMs)}` : 'sharpest nearby') : 'exact frame'} · {still.width} ×{' '}
+            {still.height}
           </span>
         </div>
         {canEdit ? (
           <>
-            <SavedField label="Caption" value={still.caption ?? ''} check={check('caption')} onSave={(v) => onSave(still.id, { caption: v })} placeholder="What this step shows" />
+            <SavedField
+              label="Caption"
+              value={still.caption ?? ''}
+              check={check('caption')}
+              onSave={(v) => onSave(still.id, { caption: v })}
+              placeholder="What this step shows"
+            />
             <SavedField
               label="Alt text"
               value={still.alt ?? ''}

@@ -42,9 +42,14 @@ export function StillsPanel({ recordingId, canEdit, onSeek, pulling }: Props) {
             <StillCard key={s.id} still={s} canEdit={canEdit} onSeek={onSeek} onSave={save} onDelete={del} />
           ))}
           {pulling && (
-            <li className="flex aspect-video flex-col items-center justify-center gap-2 rounded-lg border border-dashed border-kraft/50 bg-white/60 text-sm text-pencil" aria-live="polite">
+            <li
+              className="flex aspect-video flex-col items-center justify-center gap-2 rounded-lg border border-dashed border-kraft/50 bg-white/60 text-sm text-pencil"
+              aria-live="polite"
+            >
               <span className="h-5 w-5 animate-spin rounded-full border-2 border-kraft border-t-transparent" aria-hidden />
-              {pulling.mode === 'sharpest' ? `Looking for the sharpest frame near ${formatClock(pulling.atMs)} …` : `Pulling the frame at ${formatClock(pulling.atMs)} …`}
+              {pulling.mode === 'sharpest'
+                ? `Looking for the sharpest frame near ${formatClock(pulling.atMs)} …`
+                : `Pulling the frame at ${formatClock(pulling.atMs)} …`}
             </li>
           )}
         </ul>

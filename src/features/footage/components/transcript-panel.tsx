@@ -7,7 +7,7 @@ import { Loading } from '@/components/ui/spinner';
 import { ApiError } from '@/lib/api-client';
 import { useDeleteTranscript } from '../api/delete-transcript';
 import { useCues } from '../api/get-cues';
-import type { Recording } from '../api/types';
+import type { RecordingDto } from '@shared/schemas/footage';
 import { useUploadTranscript, type TranscriptUploaded } from '../api/upload-transcript';
 import { findMatches, stepMatch } from '../utils/cue-search';
 import { activeCueIndex } from '../utils/timeline';
@@ -20,7 +20,7 @@ const FORMAT_LABEL: Record<string, string> = { vtt: 'WebVTT', srt: 'SRT', plain:
 
 const sentence = (s: string) => s.charAt(0).toUpperCase() + s.slice(1);
 
-type Props = { recording: Recording; canEdit: boolean; timeMs: number; onSeek: (ms: number) => void };
+type Props = { recording: RecordingDto; canEdit: boolean; timeMs: number; onSeek: (ms: number) => void };
 
 /** The timed transcript beside the player: attach or replace it, follow playback, search it. */
 export function TranscriptPanel({ recording, canEdit, timeMs, onSeek }: Props) {
@@ -106,6 +106,17 @@ export function TranscriptPanel({ recording, canEdit, timeMs, onSeek }: Props) {
             Read {done.cueCount} timed lines from “{done.name}” ({FORMAT_LABEL[done.format] ?? done.format}).
           </Notice>
         )}
+        {done && !upload.error && done.notices && done.notices.length > 0 && (
+          <Notice kind="info">
+            <p>Read, with {done.notices.length === 1 ? 'one note' : `${done.notices.length} notes`}:</p>
+            <ul className="mt-1 list-disc pl-5 [font-variant-ligatures:none]">
+              {done.notices.slice(0, 20).map((n) => (
+                <li key={n}>{n}</li>
+              ))}
+            </ul>
+            {done.notices.length > 20 && <p className="mt-1">…and {done.notices.length - 20} more.</p>}
+          </Notice>
+        )}
         {remove.error && <Notice kind="error">{remove.error.message}</Notice>}
 
         {!hasTranscript ? (
@@ -127,7 +138,13 @@ export function TranscriptPanel({ recording, canEdit, timeMs, onSeek }: Props) {
           <Notice kind="error">{cues.error.message}</Notice>
         ) : (
           <>
-            <TranscriptSearch query={query} onQuery={onQuery} count={matches.length} current={current} onStep={(d) => setCurrent((c) => stepMatch(c, matches.length, d))} />
+            <TranscriptSearch
+              query={query}
+              onQuery={onQuery}
+              count={matches.length}
+              current={current}
+              onStep={(d) => setCurrent((c) => stepMatch(c, matches.length, d))}
+            />
             <div className="-mx-4 border-t border-line">
               <CueList cues={list} active={active} matches={matches} currentMatch={current} onSeek={onSeek} />
             </div>

@@ -5,7 +5,8 @@ type Props = { query: string; onQuery: (q: string) => void; count: number; curre
 /** The transcript's search box: Enter and Shift+Enter, or the arrows beside it, step through matches. */
 export function TranscriptSearch({ query, onQuery, count, current, onStep }: Props) {
   const id = useId();
-  const btn = 'flex h-8 w-8 items-center justify-center rounded-md border border-line bg-white text-ink hover:border-kraft disabled:cursor-not-allowed disabled:text-pencil';
+  const btn =
+    'flex h-8 w-8 items-center justify-center rounded-md border border-line bg-white text-ink hover:border-kraft disabled:cursor-not-allowed disabled:text-pencil';
   return (
     <div className="flex items-center gap-2">
       <label htmlFor={id} className="sr-only">
@@ -26,7 +27,7 @@ export function TranscriptSearch({ query, onQuery, count, current, onStep }: Pro
             onQuery('');
           }
         }}
-        className="min-w-0 flex-1 rounded-md border border-line bg-white px-3 py-1.5 text-sm outline-none focus:border-kraft"
+        className="min-w-0 flex-1 rounded-md border border-field bg-white px-3 py-1.5 text-sm focus:border-kraft"
       />
       {query.trim() && (
         <span className="shrink-0 text-xs text-pencil tabular-nums" aria-live="polite">

@@ -18,7 +18,7 @@ export function isTyping(target: EventTarget | null): boolean {
 const isPressable = (t: EventTarget | null) => t instanceof HTMLElement && !!t.closest('button, [role="button"], a[href], summary, video');
 
 /**
- * Space, arrows, M, S and Shift+S for the whole Footage page, except while typing or while a
+ * Space, arrows, C (chapter), S and Shift+S for the whole Footage page, except while typing or while a
  * dialog is open. Space is taken from focused buttons too: after clicking "Mark chapter" the
  * button keeps focus, and space would otherwise mark a second chapter instead of pausing.
  */
@@ -34,7 +34,7 @@ export function useFootageShortcuts(handlers: FootageShortcuts): void {
       if (e.key === ' ') run = h.toggle;
       else if (e.key === 'ArrowLeft') run = () => h.nudge(-5000);
       else if (e.key === 'ArrowRight') run = () => h.nudge(5000);
-      else if (e.key === 'm' || e.key === 'M') run = e.shiftKey ? undefined : h.mark;
+      else if (e.key === 'c' || e.key === 'C') run = e.shiftKey ? undefined : h.mark;
       else if (e.key === 's' || e.key === 'S') run = e.shiftKey ? h.sharpest : h.still;
       if (!run) return;
       e.preventDefault();

@@ -19,7 +19,9 @@ describe('looksLikeVideo', () => {
 describe('uploadErrorMessage', () => {
   it('passes the server’s words on, and says what to do about a file that is too large', () => {
     expect(uploadErrorMessage(new ApiError(415, '“a.mp4” is not a video Cardwright can use.'), 'a.mp4')).toBe('“a.mp4” is not a video Cardwright can use.');
-    expect(uploadErrorMessage(new ApiError(413, 'The recording is larger than the 8 GB limit'), 'a.mp4')).toMatch(/^The recording is larger than the 8 GB limit\. Trim/);
+    expect(uploadErrorMessage(new ApiError(413, 'The recording is larger than the 8 GB limit'), 'a.mp4')).toMatch(
+      /^The recording is larger than the 8 GB limit\. Trim/,
+    );
     expect(uploadErrorMessage(new ApiError(401, 'Sign in to continue'), 'a.mp4')).toMatch(/session has ended/);
     expect(uploadErrorMessage(new Error('boom'), 'a.mp4')).toBe('“a.mp4” could not be uploaded; please try again.');
   });

@@ -1,23 +1,24 @@
+import { fileKindWords, notAVideoMessage } from '@shared/footage/file-kind';
 import { useCallback, useSyncExternalStore } from 'react';
 import { useQueryClient, type QueryClient } from '@tanstack/react-query';
-import { VIDEO_EXTENSIONS } from '@shared/schemas/footage';
+import { VIDEO_EXTENSIONS, type RecordingDto } from '@shared/schemas/footage';
 import { ApiError } from '@/lib/api-client';
 import { deleteRecording } from '../api/delete-recording';
 import { footageKeys } from '../api/keys';
-import type { Recording } from '../api/types';
 import { UploadCancelled } from '../api/upload-file';
 import { uploadRecording } from '../api/upload-recording';
 
 export type UploadState =
   | { phase: 'idle' }
   | { phase: 'uploading'; fileName: string; loaded: number; total: number }
+  | { phase: 'paused'; fileName: string; loaded: number; total: number }
   | { phase: 'error'; fileName: string; message: string }
   | { phase: 'cancelled'; fileName: string };
 
 // Kept outside React so an upload carries on (and can still be cancelled) when the person
 // switches to another section of the tutorial and comes back.
 const states = new Map<string, UploadState>();
-const aborts = new Map<string, () => void>();
+const controls = new Map<string, { cancel: () => void; pause: () => void; resume: () => void }>();
 const listeners = new Set<() => void>();
 const IDLE: UploadState = { phase: 'idle' };
 
@@ -49,16 +50,40 @@ export function uploadErrorMessage(e: unknown, fileName: string): string {
 
 function beginUpload(qc: QueryClient, tutorialId: string, file: File, replaces?: string) {
   if (!looksLikeVideo(file)) {
-    set(tutorialId, { phase: 'error', fileName: file.name, message: `“${file.name}” is not a video Cardwright can use. Upload an MP4, MOV, WebM or MKV file.` });
+    set(tutorialId, {
+      phase: 'error',
+      fileName: file.name,
+      message: notAVideoMessage(file.name, fileKindWords({ mime: file.type, ext: file.name.includes('.') ? file.name.split('.').pop() : null })),
+    });
     return;
   }
-  aborts.get(tutorialId)?.();
+  controls.get(tutorialId)?.cancel();
   set(tutorialId, { phase: 'uploading', fileName: file.name, loaded: 0, total: file.size });
-  const up = uploadRecording(tutorialId, file, (p) => set(tutorialId, { phase: 'uploading', fileName: file.name, loaded: p.loaded, total: p.total }));
-  aborts.set(tutorialId, up.abort);
+  const up = uploadRecording(tutorialId, file, (p) => {
+    if (states.get(tutorialId)?.phase !== 'paused') set(tutorialId, { phase: 'uploading', fileName: file.name, loaded: p.loaded, total: p.total });
+  });
+  const control = {
+    cancel: up.cancel,
+    pause: () => {
+      const s = states.get(tutorialId);
+      if (s?.phase !== 'uploading') return;
+      up.pause();
+      set(tutorialId, { ...s, phase: 'paused' });
+    },
+    resume: () => {
+      const s = states.get(tutorialId);
+      if (s?.phase !== 'paused') return;
+      set(tutorialId, { ...s, phase: 'uploading' });
+      up.resume();
+    },
+  };
+  controls.set(tutorialId, control);
   up.done
-    .then(async (rec: Recording) => {
-      qc.setQueryData(footageKeys.tutorialRecordings(tutorialId), (old: { recordings: Recording[] } | undefined) => ({ recordings: [rec, ...(old?.recordings ?? [])] }));
+    .then(async (rec: RecordingDto | null) => {
+      if (rec)
+        qc.setQueryData(footageKeys.tutorialRecordings(tutorialId), (old: { recordings: RecordingDto[] } | undefined) => ({
+          recordings: [rec, ...(old?.recordings ?? [])],
+        }));
       // A failed recording that this upload replaces has nothing worth keeping.
       if (replaces) {
         await deleteRecording(replaces).catch(() => {});
@@ -72,7 +97,7 @@ function beginUpload(qc: QueryClient, tutorialId: string, file: File, replaces?:
       else set(tutorialId, { phase: 'error', fileName: file.name, message: uploadErrorMessage(e, file.name) });
     })
     .finally(() => {
-      if (aborts.get(tutorialId) === up.abort) aborts.delete(tutorialId);
+      if (controls.get(tutorialId) === control) controls.delete(tutorialId);
     });
 }
 
@@ -83,7 +108,9 @@ export function useRecordingUpload(tutorialId: string) {
   return {
     state,
     start: useCallback((file: File, opts: { replaces?: string } = {}) => beginUpload(qc, tutorialId, file, opts.replaces), [qc, tutorialId]),
-    cancel: useCallback(() => aborts.get(tutorialId)?.(), [tutorialId]),
+    cancel: useCallback(() => controls.get(tutorialId)?.cancel(), [tutorialId]),
+    pause: useCallback(() => controls.get(tutorialId)?.pause(), [tutorialId]),
+    resume: useCallback(() => controls.get(tutorialId)?.resume(), [tutorialId]),
     reset: useCallback(() => set(tutorialId, IDLE), [tutorialId]),
   };
 }

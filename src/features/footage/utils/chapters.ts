@@ -1,4 +1,5 @@
 import { formatTimestamp } from '@shared/transcript/timestamp';
+import { titleFromLine } from '@shared/footage/suggest-chapters';
 
 type ChapterLike = { title: string; startMs: number };
 
@@ -16,6 +17,18 @@ export function nextChapterName(chapters: { title: string }[]): string {
   let n = chapters.length + 1;
   while (used.has(`chapter ${n}`)) n += 1;
   return `Chapter ${n}`;
+}
+
+/**
+ * The title of a chapter marked at `t`: taken from the line spoken there (the cue playing at `t`,
+ * or one starting within the next two seconds, since a maker presses the key as they start
+ * talking), or "Chapter N" when no line says anything to name it by or that title is taken.
+ */
+export function chapterTitleAt(chapters: { title: string }[], cues: { startMs: number; endMs: number; text: string }[], t: number): string {
+  const cue = cues.find((c) => c.startMs <= t && t < c.endMs) ?? cues.find((c) => c.startMs > t && c.startMs - t <= 2000);
+  const title = cue ? titleFromLine(cue.text) : '';
+  const taken = new Set(chapters.map((c) => c.title.trim().toLowerCase()));
+  return title && !taken.has(title.toLowerCase()) ? title : nextChapterName(chapters);
 }
 
 /** Chapters shorter than this are merged by video platforms (from memory, a common platform rule). */

@@ -31,7 +31,14 @@ describe('findMatches', () => {
 describe('splitByMatches', () => {
   it('cuts the text into plain and matched parts that join back to the original', () => {
     const text = 'Box lid, then the BOX base';
-    const parts = splitByMatches(text, [{ start: 0, end: 3 }, { start: 18, end: 21 }], 4);
+    const parts = splitByMatches(
+      text,
+      [
+        { start: 0, end: 3 },
+        { start: 18, end: 21 },
+      ],
+      4,
+    );
     expect(parts).toEqual([
       { text: 'Box', match: 4 },
       { text: ' lid, then the ', match: null },

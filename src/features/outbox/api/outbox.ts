@@ -1,5 +1,6 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
+import type { OutboxDto, OutboxEntryDto } from '@shared/schemas/outbox';
 
 export const outboxKeys = {
   all: ['outbox'] as const,
@@ -7,12 +8,17 @@ export const outboxKeys = {
   detail: (id: string) => [...outboxKeys.all, 'detail', id] as const,
 };
 
-export type OutboxSummary = { id: string; from: string; to: string; subject: string; createdAt: string; attachments: { filename: string; size: number }[] };
-export type OutboxMessage = OutboxSummary & { text: string; html: string | null };
-
-export const getOutbox = () => api<{ messages: OutboxSummary[] }>('/outbox');
+/** The signed-in person's own mail, as the local fake caught it. */
+export const getOutbox = () => api<OutboxDto>('/outbox');
 export const outboxQueryOptions = () => queryOptions({ queryKey: outboxKeys.list(), queryFn: getOutbox, refetchInterval: 5000 });
 export const useOutbox = () => useQuery(outboxQueryOptions());
 
-export const getOutboxMessage = (id: string) => api<{ message: OutboxMessage }>(`/outbox/${id}`);
+export const getOutboxMessage = (id: string) => api<OutboxEntryDto>(`/outbox/${id}`);
 export const useOutboxMessage = (id: string) => useQuery(queryOptions({ queryKey: outboxKeys.detail(id), queryFn: () => getOutboxMessage(id) }));
+
+/** Deletes one of the person's messages. */
+export const deleteOutboxMessage = (id: string) => api<void>(`/outbox/${id}`, { method: 'DELETE' });
+export const useDeleteOutboxMessage = () => {
+  const qc = useQueryClient();
+  return useMutation({ mutationFn: deleteOutboxMessage, onSuccess: () => qc.invalidateQueries({ queryKey: outboxKeys.all }) });
+};

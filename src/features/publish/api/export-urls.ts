@@ -1,4 +1,4 @@
-import type { Paper } from './types';
+import type { Paper } from '@shared/schemas/publish';
 
 /** Every export address of a tutorial, built in one place (the server's exports router owns them). */
 export const exportUrls = {
@@ -9,6 +9,8 @@ export const exportUrls = {
   zip: (id: string) => `${exportUrls.base(id)}/zip`,
   handoutPdf: (id: string, paper: Paper) => `${exportUrls.base(id)}/handout.pdf?paper=${paper}`,
   templatePdf: (id: string, paper: Paper) => `${exportUrls.base(id)}/template.pdf?paper=${paper}`,
+  /** For api(), which adds /api itself: the template's page count as JSON. */
+  templateInfo: (id: string, paper: Paper) => `/tutorials/${id}/export/template.json?paper=${paper}`,
   templateSvg: (id: string, paper: Paper, page = 1) => `${exportUrls.base(id)}/template.svg?paper=${paper}&page=${page}`,
   description: (id: string) => `${exportUrls.base(id)}/description.txt`,
   descriptionDownload: (id: string) => `${exportUrls.base(id)}/description.txt?download=1`,

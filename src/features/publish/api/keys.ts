@@ -1,4 +1,4 @@
-import type { Paper } from './types';
+import type { Paper } from '@shared/schemas/publish';
 
 /**
  * Query keys of the Publish section. Everything an export shows sits under
@@ -12,4 +12,5 @@ export const publishKeys = {
   description: (tutorialId: string) => [...publishKeys.tutorial(tutorialId), 'description'] as const,
   chapters: (tutorialId: string) => [...publishKeys.tutorial(tutorialId), 'chapters'] as const,
   template: (tutorialId: string, paper: Paper) => [...publishKeys.tutorial(tutorialId), 'template', paper] as const,
+  published: (tutorialId: string) => [...publishKeys.tutorial(tutorialId), 'published'] as const,
 };

@@ -49,7 +49,9 @@ export function BlogPanel({ tutorialId, slug }: { tutorialId: string; slug: stri
         <DownloadButton label="Download zip" url={exportUrls.zip(tutorialId)} fallbackName={`${slug}.zip`} />
         <DownloadButton label="Download HTML" url={exportUrls.blogDownload(tutorialId)} fallbackName={`${slug}.html`} />
       </div>
-      <p className="mt-1 text-xs text-pencil">The zip holds index.html with its images beside it, for a blog that takes uploads; the HTML file links the images on this server.</p>
+      <p className="mt-1 text-xs text-pencil">
+        The zip holds index.html with its images beside it, for a blog that takes uploads; the HTML file links the images on this server.
+      </p>
       {blog.error && (
         <div className="mt-3">
           <Notice kind="error">The blog post could not be made: {blog.error.message}</Notice>

@@ -32,7 +32,11 @@ export function DescriptionPanel({ tutorialId, slug, footagePath }: { tutorialId
   const noChapters = chapters.data && chapters.data.chapters.length === 0;
 
   return (
-    <Panel id="description" title="Video description" intro="Paste it under the video: the chapter list, the supplies with their shop links, the disclosure and the link to the written tutorial.">
+    <Panel
+      id="description"
+      title="Video description"
+      intro="Paste it under the video: the chapter list, the supplies with their shop links, the disclosure and the link to the written tutorial."
+    >
       {text.isPending ? (
         <Loading label="Writing the description" />
       ) : text.error ? (
@@ -45,7 +49,7 @@ export function DescriptionPanel({ tutorialId, slug, footagePath }: { tutorialId
             aria-label="Video description text"
             value={text.data}
             rows={Math.min(18, Math.max(6, text.data.split('\n').length + 1))}
-            className="w-full resize-y rounded-md border border-line bg-paper px-3 py-2 font-mono text-xs leading-relaxed"
+            className="w-full resize-y rounded-md border border-field bg-paper px-3 py-2 font-mono text-xs leading-relaxed"
           />
           <div className="mt-2 flex flex-wrap items-start gap-3">
             <div className="flex flex-col items-start gap-1">
@@ -66,7 +70,8 @@ export function DescriptionPanel({ tutorialId, slug, footagePath }: { tutorialId
           </div>
           {copy.state.status === 'manual' && (
             <p role="alert" className="mt-1 text-xs text-rosehip">
-              The browser did not allow copying ({copy.state.message.replace(/[.\s]+$/, '')}). The text is selected above: press Ctrl+C (⌘C on a Mac) to copy it.
+              The browser did not allow copying ({copy.state.message.replace(/[.\s]+$/, '')}). The text is selected above: press Ctrl+C (⌘C on a Mac) to copy
+              it.
             </p>
           )}
         </>

@@ -15,7 +15,13 @@ export function DownloadButton(props: { label: string; url: string; fallbackName
       : 'Preparing …';
   return (
     <div className="flex flex-col items-start gap-1">
-      <Button variant={props.variant ?? 'secondary'} busy={busy} disabled={props.disabled} onClick={() => void start(props.url, props.fallbackName)} aria-label={busy ? `${props.label}: ${busyLabel}` : undefined}>
+      <Button
+        variant={props.variant ?? 'secondary'}
+        busy={busy}
+        disabled={props.disabled}
+        onClick={() => void start(props.url, props.fallbackName)}
+        aria-label={busy ? `${props.label}: ${busyLabel}` : undefined}
+      >
         {busy ? busyLabel : props.label}
       </Button>
       {/* w-0 min-w-full: the line wraps at the button's width instead of widening the column and moving its neighbours. */}

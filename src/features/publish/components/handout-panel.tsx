@@ -12,7 +12,11 @@ import { PaperChoice } from './paper-choice';
 export function HandoutPanel({ tutorialId, slug, hasQrTarget }: { tutorialId: string; slug: string; hasQrTarget: boolean }) {
   const [paper, setPaper] = usePaper('handout');
   return (
-    <Panel id="handout" title="Handout" intro="For classes and the craft table: a photo, supplies, the cut list in fractions and millimetres, numbered steps with small photos and a QR code.">
+    <Panel
+      id="handout"
+      title="Handout"
+      intro="For classes and the craft table: a photo, supplies, the cut list in fractions and millimetres, numbered steps with small photos and a QR code."
+    >
       <PaperChoice name="handout-paper" label="Handout paper" value={paper} onChange={setPaper} />
       <div className="mt-3 flex flex-wrap items-start gap-3">
         <DownloadButton label="Download PDF" url={exportUrls.handoutPdf(tutorialId, paper)} fallbackName={`${slug}-handout-${paper}.pdf`} />

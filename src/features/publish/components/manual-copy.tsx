@@ -10,7 +10,8 @@ export function ManualCopy({ label, text, reason, rows = 6 }: { label: string; t
   return (
     <div className="mt-2">
       <p className="text-xs text-rosehip" role="alert">
-        The browser did not allow copying{reason ? ` (${reason.replace(/[.\s]+$/, '')})` : ''}. The text is selected below: press Ctrl+C (⌘C on a Mac) to copy it.
+        The browser did not allow copying{reason ? ` (${reason.replace(/[.\s]+$/, '')})` : ''}. The text is selected below: press Ctrl+C (⌘C on a Mac) to copy
+        it.
       </p>
       <textarea
         ref={area}
@@ -19,7 +20,7 @@ export function ManualCopy({ label, text, reason, rows = 6 }: { label: string; t
         value={text}
         rows={rows}
         onFocus={(e) => e.currentTarget.select()}
-        className="mt-1 w-full rounded-md border border-line bg-paper px-2 py-1 font-mono text-xs"
+        className="mt-1 w-full rounded-md border border-field bg-paper px-2 py-1 font-mono text-xs"
       />
     </div>
   );

@@ -1,7 +1,19 @@
 import type { ReactNode } from 'react';
 
 /** One card of the Publish section, with its heading and a line on what it is for. */
-export function Panel({ title, intro, children, id, className = '' }: { title: string; intro?: ReactNode; children: ReactNode; id?: string; className?: string }) {
+export function Panel({
+  title,
+  intro,
+  children,
+  id,
+  className = '',
+}: {
+  title: string;
+  intro?: ReactNode;
+  children: ReactNode;
+  id?: string;
+  className?: string;
+}) {
   const hid = id ? `${id}-title` : undefined;
   return (
     <section aria-labelledby={hid} className={`rounded-lg border border-line bg-white p-5 ${className}`}>

@@ -1,4 +1,4 @@
-import type { Paper } from '../api/types';
+import type { Paper } from '@shared/schemas/publish';
 import { PAPERS } from '../utils/paper';
 
 /** Letter or A4, as a two-way switch of radio buttons (a fieldset, so it is one named group). */

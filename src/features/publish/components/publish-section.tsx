@@ -1,10 +1,12 @@
-import type { PublishTutorial } from '../api/types';
+import type { ReactNode } from 'react';
+import type { TutorialDto } from '@shared/schemas/tutorial';
 import { useRefreshExports } from '../api/refresh-exports';
 import { BlogPanel } from './blog-panel';
 import { DescriptionPanel } from './description-panel';
 import { HandoutPanel } from './handout-panel';
 import { Panel } from './panel';
-import { StatusPanel } from './status-panel';
+import { SchedulePanel } from './schedule-panel';
+import { StatusPanel, type OpenCommentLine } from './status-panel';
 import { TemplatePanel } from './template-panel';
 import { VideoUrlField } from './video-url-field';
 
@@ -15,19 +17,24 @@ import { VideoUrlField } from './video-url-field';
  * to save the tutorial and follow its moves.
  */
 export function PublishSection(props: {
-  tutorial: PublishTutorial;
+  tutorial: TutorialDto;
   /** The absolute public address the tutorial has (or will have) once published; null when unknown. */
   publicUrl: string | null;
   cutListPath: string;
   footagePath: string;
   onSaveVideoUrl: (url: string | null) => Promise<unknown>;
-  onMoved?: (t: PublishTutorial) => unknown;
+  onMoved?: (t: TutorialDto) => unknown;
+  /** The open comments a send-back lists, and the review's checklist and history (other features). */
+  openComments?: OpenCommentLine[];
+  review?: ReactNode;
 }) {
   const { tutorial } = props;
   const refresh = useRefreshExports(tutorial.id);
   return (
     <div className="space-y-6">
-      <StatusPanel tutorial={tutorial} publicUrl={props.publicUrl} onMoved={props.onMoved} />
+      <StatusPanel tutorial={tutorial} publicUrl={props.publicUrl} onMoved={props.onMoved} openComments={props.openComments} />
+      <SchedulePanel tutorial={tutorial} onChanged={props.onMoved} />
+      {props.review}
       <div className="grid grid-cols-1 gap-6 lg:grid-cols-[minmax(0,1fr)_24rem]">
         <BlogPanel tutorialId={tutorial.id} slug={tutorial.slug} />
         <div className="space-y-6">

@@ -1,10 +1,12 @@
 import { useState } from 'react';
-import { TRANSITIONS, type Transition, type TutorialState } from '@shared/schemas/tutorial';
+import { useQuery } from '@tanstack/react-query';
+import { reviewState, stateLabel, TRANSITIONS, type Transition, type TutorialState, type TutorialDto } from '@shared/schemas/tutorial';
 import { Button } from '@/components/ui/button';
 import { ConfirmDialog } from '@/components/ui/confirm';
 import { Notice } from '@/components/ui/notice';
+import { ApiError } from '@/lib/api-client';
+import { supplyChecksQueryOptions } from '@/lib/resources';
 import { useChangeState } from '../api/change-state';
-import type { PublishTutorial } from '../api/types';
 import { PublicAddress } from './public-address';
 
 // "is a draft", "needs changes": the state read as part of a sentence.
@@ -39,16 +41,51 @@ const WAITING: Partial<Record<TutorialState, string>> = {
   approved: 'A coordinator or the studio owner publishes it.',
 };
 
+// A published tutorial's update: what each of its states means, and who moves it next.
+const UPDATE_TEXT: Partial<Record<TutorialState, string>> = {
+  draft: 'Changes made since publishing wait here as an update. Send it for review when it is ready; readers keep the published version until then.',
+  in_review: 'The update waits for a coordinator to approve it or send it back. Readers still see the published version.',
+  needs_changes: 'A coordinator sent the update back. Make the changes, then send it for review again.',
+  approved: 'The update is approved: publishing it replaces what readers see.',
+};
+const UPDATE_PHRASE: Partial<Record<TutorialState, string>> = {
+  draft: 'The update is a draft.',
+  in_review: 'The update is in review.',
+  needs_changes: 'The update needs changes.',
+  approved: 'The update is approved.',
+};
+const UPDATE_LABEL: Partial<Record<Transition, string>> = {
+  submit: 'Send the update for review',
+  approve: 'Approve the update',
+  publish: 'Publish the update',
+};
+
 const ORDER: Transition[] = ['submit', 'approve', 'publish', 'sendBack', 'unpublish'];
 
-function consequence(action: Transition, publicUrl: string | null): string {
+/** A comment still open, as the send-back note lists it. */
+export type OpenCommentLine = { id: string; where: string; body: string; author: string };
+
+// The moves that ask for a note first: what the note is for, and the button that sends it.
+const NOTE: Partial<Record<Transition, { label: string; placeholder: string; send: string }>> = {
+  submit: {
+    label: 'A short note for the coordinator',
+    placeholder: 'What to look at, e.g. “New lid sizes in step 4; the floral paper is from the new pad.”',
+    send: 'Send for review',
+  },
+  approve: { label: 'Note for the maker (optional)', placeholder: 'e.g. “Lovely photos. Publishing on the 20th.”', send: 'Approve' },
+  sendBack: { label: 'Note for the maker', placeholder: 'What should change, e.g. “Add the lid’s score lines to step 4.”', send: 'Send back to the maker' },
+};
+
+function consequence(action: Transition, publicUrl: string | null, isUpdate: boolean): string {
+  if (isUpdate && action === 'publish') return 'Publishing the update replaces what readers see on the public page and in every export.';
+  if (isUpdate && action === 'submit') return 'The studio’s coordinators get an e-mail asking them to review the changes.';
   switch (action) {
     case 'submit':
       return 'The studio’s coordinators get an e-mail asking them to review it.';
     case 'approve':
       return 'Marks it ready to publish; the maker gets an e-mail.';
     case 'sendBack':
-      return 'Returns it to the maker as “needs changes”, with your note in their e-mail.';
+      return 'Returns it to the maker as “needs changes”, with your note and the open comments in their e-mail.';
     case 'publish':
       return publicUrl ? `Publishing makes the page and exports public at ${publicUrl}.` : 'Publishing makes the page and exports public.';
     case 'unpublish':
@@ -56,32 +93,75 @@ function consequence(action: Transition, publicUrl: string | null): string {
   }
 }
 
+/** What a move did, in words: an update's own moves speak of the update. */
+function doneMessage(action: Transition, t: TutorialDto): string {
+  const leftover = t.state === 'published' && t.updateState;
+  if (action === 'publish' || action === 'unpublish' || !leftover)
+    return `Done: the tutorial ${NOW[t.state]}.${action === 'publish' && leftover ? ' Edits made after the approval wait as an update.' : ''}`;
+  return `Done: the update is now ${stateLabel(reviewState(t))}.`;
+}
+
 /**
  * Where the tutorial stands in review, and the moves this person may make now (from the
  * server's abilities), each with a line on what it does. Sending back takes an optional note;
  * unpublishing asks first, since it takes a live page down.
  */
-export function StatusPanel({ tutorial, publicUrl, onMoved }: { tutorial: PublishTutorial; publicUrl: string | null; onMoved?: (t: PublishTutorial) => unknown }) {
+export function StatusPanel({
+  tutorial,
+  publicUrl,
+  onMoved,
+  openComments = [],
+}: {
+  tutorial: TutorialDto;
+  publicUrl: string | null;
+  onMoved?: (t: TutorialDto) => unknown;
+  /** Listed under the send-back note: they go to the maker with it. */
+  openComments?: OpenCommentLine[];
+}) {
   const move = useChangeState(tutorial.id, onMoved);
-  const [noteOpen, setNoteOpen] = useState(false);
+  const [noteFor, setNoteFor] = useState<Transition | null>(null);
+  const noteOpen = noteFor !== null;
+  const form = noteFor ? NOTE[noteFor] : undefined;
   const [note, setNote] = useState('');
   const [confirmUnpublish, setConfirmUnpublish] = useState(false);
+  // The open check warnings publishing asks to confirm (from the checks, or as the server named them).
+  const [confirmPublish, setConfirmPublish] = useState<string[] | null>(null);
   const [done, setDone] = useState<string | null>(null);
-  const moves = ORDER.filter((a) => tutorial.abilities[a] && (TRANSITIONS[a].from as readonly TutorialState[]).includes(tutorial.state));
+  // A published tutorial's moves act on its update (if any); unpublishing acts on the tutorial.
+  const review = reviewState(tutorial);
+  const isUpdate = tutorial.state === 'published' && Boolean(tutorial.updateState);
+  const checks = useQuery({ ...supplyChecksQueryOptions(tutorial.id), enabled: review === 'approved' && Boolean(tutorial.abilities.publish) });
+  const moves = ORDER.filter(
+    (a) => tutorial.abilities[a] && (a === 'unpublish' ? tutorial.state === 'published' : (TRANSITIONS[a].from as readonly TutorialState[]).includes(review)),
+  );
+  const label = (a: Transition) => (isUpdate && UPDATE_LABEL[a]) || TRANSITIONS[a].label;
 
-  const run = (action: Transition, withNote?: string) => {
+  const run = (action: Transition, withNote?: string, confirmWarnings?: boolean) => {
     setDone(null);
     move.mutate(
-      { action, note: withNote?.trim() || undefined },
+      { action, note: withNote?.trim() || undefined, confirmWarnings },
       {
         onSuccess: (t) => {
-          setNoteOpen(false);
+          setNoteFor(null);
           setNote('');
           setConfirmUnpublish(false);
-          setDone(`Done: the tutorial ${NOW[t.state]}.`);
+          setConfirmPublish(null);
+          setDone(doneMessage(action, t));
+        },
+        onError: (e) => {
+          // Warnings opened since the page loaded: ask about the ones the server named.
+          if (e instanceof ApiError && e.status === 409 && e.body.code === 'unconfirmed-warnings' && Array.isArray(e.body.warnings)) {
+            move.reset();
+            setConfirmPublish(e.body.warnings as string[]);
+          }
         },
       },
     );
+  };
+  const publish = () => {
+    const open = checks.data?.unresolved ?? [];
+    if (open.length) setConfirmPublish(open);
+    else run('publish');
   };
 
   return (
@@ -95,6 +175,11 @@ export function StatusPanel({ tutorial, publicUrl, onMoved }: { tutorial: Publis
           <strong>{STATE_PHRASE[tutorial.state][1]}</strong>. {STATE_TEXT[tutorial.state]}
         </p>
       </div>
+      {isUpdate && (
+        <p className="mt-2 rounded-md border border-kraft/40 bg-kraft-light px-3 py-2 text-sm">
+          <strong>{UPDATE_PHRASE[review]}</strong> {UPDATE_TEXT[review]}
+        </p>
+      )}
 
       {tutorial.state === 'published' && publicUrl && (
         <div className="mt-4">
@@ -105,7 +190,7 @@ export function StatusPanel({ tutorial, publicUrl, onMoved }: { tutorial: Publis
       <hr className="score-rule my-4" />
 
       {moves.length === 0 ? (
-        <p className="text-sm text-pencil">{WAITING[tutorial.state] ?? 'There is no review step for you to take now.'}</p>
+        <p className="text-sm text-pencil">{WAITING[review] ?? 'There is no review step for you to take now.'}</p>
       ) : (
         <ul className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3" aria-label="What you can do now">
           {moves.map((a) => (
@@ -114,47 +199,69 @@ export function StatusPanel({ tutorial, publicUrl, onMoved }: { tutorial: Publis
                 variant={a === 'sendBack' || a === 'unpublish' ? 'danger' : 'primary'}
                 busy={move.isPending && move.variables?.action === a}
                 disabled={move.isPending}
-                aria-expanded={a === 'sendBack' ? noteOpen : undefined}
+                aria-expanded={NOTE[a] ? noteFor === a : undefined}
                 onClick={() => {
-                  if (a === 'sendBack') setNoteOpen((o) => !o);
+                  if (NOTE[a]) setNoteFor((o) => (o === a ? null : a));
                   else if (a === 'unpublish') setConfirmUnpublish(true);
+                  else if (a === 'publish') publish();
                   else run(a);
                 }}
               >
-                {TRANSITIONS[a].label}
+                {label(a)}
               </Button>
-              <p className="text-xs text-pencil">{consequence(a, publicUrl)}</p>
+              <p className="text-xs text-pencil">{consequence(a, publicUrl, isUpdate)}</p>
             </li>
           ))}
         </ul>
       )}
 
-      {noteOpen && (
+      {noteOpen && form && noteFor && (
         <form
           className="mt-4 max-w-xl rounded-md border border-line bg-paper p-3"
-          aria-label="Send back"
+          aria-label={label(noteFor)}
           onSubmit={(e) => {
             e.preventDefault();
-            run('sendBack', note);
+            run(noteFor, note);
           }}
         >
-          <label htmlFor="send-back-note" className="text-sm font-medium">
-            Note for the maker (optional)
+          <label htmlFor="review-note" className="text-sm font-medium">
+            {form.label}
           </label>
           <textarea
-            id="send-back-note"
+            id="review-note"
             rows={3}
             maxLength={2000}
             value={note}
+            autoFocus
             onChange={(e) => setNote(e.target.value)}
-            placeholder="What should change, e.g. “Add the lid’s score lines to step 4.”"
-            className="mt-1 w-full rounded-md border border-line bg-white px-2 py-1.5 text-sm outline-none focus:border-kraft"
+            placeholder={form.placeholder}
+            className="mt-1 w-full rounded-md border border-field bg-white px-2 py-1.5 text-sm focus:border-kraft"
           />
+          {noteFor === 'sendBack' && (
+            <div className="mt-2 text-sm">
+              {openComments.length === 0 ? (
+                <p className="text-pencil">No comments are open; say in the note what should change.</p>
+              ) : (
+                <>
+                  <p className="font-medium">
+                    {openComments.length} open {openComments.length === 1 ? 'comment goes' : 'comments go'} with the note:
+                  </p>
+                  <ol className="ml-5 list-decimal text-xs">
+                    {openComments.map((c) => (
+                      <li key={c.id}>
+                        <span className="font-medium">{c.where}:</span> {c.body} <span className="text-pencil">({c.author})</span>
+                      </li>
+                    ))}
+                  </ol>
+                </>
+              )}
+            </div>
+          )}
           <div className="mt-2 flex gap-2">
-            <Button type="submit" variant="danger" busy={move.isPending}>
-              Send back to the maker
+            <Button type="submit" variant={noteFor === 'sendBack' ? 'danger' : 'primary'} busy={move.isPending}>
+              {form.send}
             </Button>
-            <Button variant="ghost" onClick={() => setNoteOpen(false)}>
+            <Button variant="ghost" onClick={() => setNoteFor(null)}>
               Cancel
             </Button>
           </div>
@@ -165,6 +272,23 @@ export function StatusPanel({ tutorial, publicUrl, onMoved }: { tutorial: Publis
         {move.error && <Notice kind="error">{move.error.message}</Notice>}
         {done && !move.error && <Notice kind="success">{done}</Notice>}
       </div>
+
+      <ConfirmDialog
+        open={confirmPublish !== null}
+        title={`Publish “${tutorial.title}” with ${confirmPublish?.length === 1 ? 'a warning' : `${confirmPublish?.length ?? 0} warnings`} open?`}
+        confirmLabel="Publish anyway"
+        busy={move.isPending}
+        onConfirm={() => run('publish', undefined, true)}
+        onCancel={() => setConfirmPublish(null)}
+      >
+        <p>These checks are not resolved:</p>
+        <ul className="mt-2 list-disc space-y-1 pl-5">
+          {(confirmPublish ?? []).map((w) => (
+            <li key={w}>{w}</li>
+          ))}
+        </ul>
+        <p className="mt-2">Readers will see the supplies as they are. You can fix them from the Supplies section instead, or keep a count on purpose there.</p>
+      </ConfirmDialog>
 
       <ConfirmDialog
         open={confirmUnpublish}

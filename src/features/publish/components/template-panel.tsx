@@ -19,7 +19,11 @@ export function TemplatePanel({ tutorialId, slug, cutListPath }: { tutorialId: s
   const pages = info.data?.kind === 'ready' ? info.data.pageCount : 0;
 
   return (
-    <Panel id="template" title="Cutting template" intro="Every piece at actual size, score lines dashed, notches marked, with a 1 in and a 25 mm test square.">
+    <Panel
+      id="template"
+      title="Cutting template"
+      intro="Every piece at actual size with its outline, material and grain; score lines dashed, notches marked; pieces larger than the page printed in parts that join A to A; a 1 in and a 25 mm test square on every page."
+    >
       <PaperChoice name="template-paper" label="Template paper" value={paper} onChange={setPaper} />
       <div className="mt-3">
         {info.isPending ? (
@@ -27,24 +31,35 @@ export function TemplatePanel({ tutorialId, slug, cutListPath }: { tutorialId: s
         ) : info.error ? (
           <Notice kind="error">The template could not be made: {info.error.message}</Notice>
         ) : info.data.kind === 'empty' ? (
-          <EmptyState title="The cut list is empty" action={<Link to={cutListPath} className="text-sm font-medium text-kraft-dark underline">Go to the Cut list</Link>}>
+          <EmptyState
+            title="The cut list is empty"
+            action={
+              <Link to={cutListPath} className="text-sm font-medium text-kraft-dark underline">
+                Go to the Cut list
+              </Link>
+            }
+          >
             The template draws the pieces of the cut list. Add them in the Cut list section and come back here.
           </EmptyState>
         ) : (
           <>
             <div className="flex flex-wrap items-start gap-3">
               <DownloadButton label="Download PDF" url={exportUrls.templatePdf(tutorialId, paper)} fallbackName={`${slug}-template-${paper}.pdf`} />
-              {pages <= 1 && <DownloadButton label="Download SVG" url={exportUrls.templateSvg(tutorialId, paper)} fallbackName={`${slug}-template-${paper}.svg`} />}
+              {pages <= 1 && (
+                <DownloadButton label="Download SVG" url={exportUrls.templateSvg(tutorialId, paper)} fallbackName={`${slug}-template-${paper}.svg`} />
+              )}
             </div>
             {pages > 1 && (
               <div className="mt-3">
-                <p className="text-sm">
-                  The template takes {pages} pages; SVG files hold one page each:
-                </p>
+                <p className="text-sm">The template takes {pages} pages; SVG files hold one page each:</p>
                 <ul className="mt-2 flex flex-wrap gap-3" aria-label="SVG pages">
                   {Array.from({ length: pages }, (_, i) => i + 1).map((n) => (
                     <li key={n}>
-                      <DownloadButton label={`SVG page ${n}`} url={exportUrls.templateSvg(tutorialId, paper, n)} fallbackName={`${slug}-template-${paper}-page-${n}.svg`} />
+                      <DownloadButton
+                        label={`SVG page ${n}`}
+                        url={exportUrls.templateSvg(tutorialId, paper, n)}
+                        fallbackName={`${slug}-template-${paper}-page-${n}.svg`}
+                      />
                     </li>
                   ))}
                 </ul>

@@ -81,7 +81,7 @@ export function VideoUrlField({ value, canEdit, onSave }: { value: string | null
           }}
           aria-invalid={status === 'error' || undefined}
           aria-describedby={`${id}-${status === 'error' ? 'error' : 'hint'}`}
-          className={`min-w-0 flex-1 rounded-md border bg-white px-3 py-2 text-sm outline-none focus:border-kraft ${status === 'error' ? 'border-rosehip' : 'border-line'}`}
+          className={`min-w-0 flex-1 rounded-md border bg-white px-3 py-2 text-sm focus:border-kraft ${status === 'error' ? 'border-rosehip' : 'border-field'}`}
         />
         <Button type="submit" variant="secondary" busy={status === 'saving'} disabled={!changed}>
           Save

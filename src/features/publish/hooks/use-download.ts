@@ -2,10 +2,7 @@ import { useCallback, useEffect, useRef, useState } from 'react';
 import { fetchExport, type ExportProgress } from '../api/fetch-export';
 
 export type DownloadState =
-  | { status: 'idle' }
-  | { status: 'busy'; progress: ExportProgress | null }
-  | { status: 'done'; filename: string }
-  | { status: 'error'; message: string };
+  { status: 'idle' } | { status: 'busy'; progress: ExportProgress | null } | { status: 'done'; filename: string } | { status: 'error'; message: string };
 
 /** Hands a Blob to the browser as a download under `filename`. */
 export function saveBlob(blob: Blob, filename: string) {

@@ -1,5 +1,5 @@
 import { useCallback, useState } from 'react';
-import type { Paper } from '../api/types';
+import type { Paper } from '@shared/schemas/publish';
 import { asPaper, defaultPaper } from '../utils/paper';
 
 const KEY = 'cardwright.publish.paper';

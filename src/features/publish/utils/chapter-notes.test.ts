@@ -40,7 +40,13 @@ describe('chapterNotes', () => {
   });
 
   it('notes fewer than three chapters (from memory)', () => {
-    const notes = chapterNotes([{ title: 'Intro', startMs: 0 }, { title: 'Fold', startMs: s(1) }], s(3));
+    const notes = chapterNotes(
+      [
+        { title: 'Intro', startMs: 0 },
+        { title: 'Fold', startMs: s(1) },
+      ],
+      s(3),
+    );
     expect(notes).toEqual(['Video sites usually show chapters only when there are at least three; this list has two.']);
     expect(chapterNotes([{ title: 'All of it', startMs: 0 }], s(3))[0]).toContain('this list has one');
   });
@@ -69,6 +75,15 @@ describe('chapterNotes', () => {
   });
 
   it('does not judge the last chapter without the recording length', () => {
-    expect(chapterNotes([{ title: 'a', startMs: 0 }, { title: 'b', startMs: s(1) }, { title: 'c', startMs: s(2) }], null)).toEqual([]);
+    expect(
+      chapterNotes(
+        [
+          { title: 'a', startMs: 0 },
+          { title: 'b', startMs: s(1) },
+          { title: 'c', startMs: s(2) },
+        ],
+        null,
+      ),
+    ).toEqual([]);
   });
 });

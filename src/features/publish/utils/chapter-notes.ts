@@ -1,5 +1,5 @@
 import { formatTimestamp } from '@shared/transcript/timestamp';
-import type { ChapterInfo } from '../api/types';
+import type { ChapterInfo } from '../api/get-description-chapters';
 
 // Video platforms read a chapter list from a description only when its first line is at 0:00,
 // it has at least three lines and each chapter lasts at least 10 s (from memory, a common
@@ -32,7 +32,9 @@ export function chapterNotes(chapters: ChapterInfo[], durationMs: number | null)
     return end != null && end - c.startMs < MIN_CHAPTER_MS;
   });
   if (short.length) {
-    notes.push(`${short.map((c) => `“${c.title}”`).join(', ')} ${short.length === 1 ? 'lasts' : 'last'} under 10 seconds; video sites may not show the chapters.`);
+    notes.push(
+      `${short.map((c) => `“${c.title}”`).join(', ')} ${short.length === 1 ? 'lasts' : 'last'} under 10 seconds; video sites may not show the chapters.`,
+    );
   }
   return notes;
 }

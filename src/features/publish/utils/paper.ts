@@ -1,4 +1,4 @@
-import type { Paper } from '../api/types';
+import type { Paper } from '@shared/schemas/publish';
 
 export const PAPERS: readonly { key: Paper; label: string; size: string }[] = [
   // ANSI/ASME Y14.1 Letter; ISO 216 A4 (REFERENCES.md "Sheets").

@@ -13,13 +13,19 @@ import { useInvite } from '../api/members';
 export function InviteForm({ studioId }: { studioId: string }) {
   const invite = useInvite(studioId);
   const [message, setMessage] = useState<{ kind: 'error' | 'success'; text: string } | null>(null);
-  const { register, handleSubmit, setError, reset, formState } = useForm<InviteInput>({ resolver: zodResolver(inviteSchema), defaultValues: { email: '', role: 'maker' } });
+  const { register, handleSubmit, setError, reset, formState } = useForm<InviteInput>({
+    resolver: zodResolver(inviteSchema),
+    defaultValues: { email: '', role: 'maker' },
+  });
   const submit = handleSubmit(async (v) => {
     setMessage(null);
     try {
-      await invite.mutateAsync(v);
+      const sent = await invite.mutateAsync(v);
       reset({ email: '', role: v.role });
-      setMessage({ kind: 'success', text: `Invitation sent to ${v.email}.` });
+      setMessage({
+        kind: 'success',
+        text: sent.resent ? `Invitation sent again to ${sent.email}; the earlier link no longer works.` : `Invitation sent to ${sent.email}.`,
+      });
     } catch (e) {
       setMessage({ kind: 'error', text: applyServerErrors(e, setError) });
     }
@@ -37,7 +43,11 @@ export function InviteForm({ studioId }: { studioId: string }) {
       <Button type="submit" busy={invite.isPending}>
         Send invitation
       </Button>
-      {message && <div className="w-full"><Notice kind={message.kind}>{message.text}</Notice></div>}
+      {message && (
+        <div className="w-full">
+          <Notice kind={message.kind}>{message.text}</Notice>
+        </div>
+      )}
     </form>
   );
 }

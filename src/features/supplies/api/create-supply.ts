@@ -1,12 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CreateSupplyInput } from '@shared/schemas/supply';
+import type { CreateSupplyInput, SupplyDto } from '@shared/schemas/supply';
 import { api } from '@/lib/api-client';
 import { supplyKeys } from './keys';
-import type { Supply } from './types';
 
 /** Adds a supply at the end of the list (201 Supply; 400 with field issues). */
 export const createSupply = ({ tutorialId, ...input }: CreateSupplyInput & { tutorialId: string }) =>
-  api<Supply>(`/tutorials/${tutorialId}/supplies`, { method: 'POST', body: input });
+  api<SupplyDto>(`/tutorials/${tutorialId}/supplies`, { method: 'POST', body: input });
 
 /** Adds one supply. */
 export function useCreateSupply(tutorialId: string) {
@@ -18,7 +17,7 @@ export function useCreateSupply(tutorialId: string) {
 }
 
 /** What adding a pasted list did: the supplies added and, when one was refused, which and why. */
-export type AddedSupplies = { added: Supply[]; refused: { input: CreateSupplyInput; error: unknown } | null };
+export type AddedSupplies = { added: SupplyDto[]; refused: { input: CreateSupplyInput; error: unknown } | null };
 
 /**
  * Adds several supplies in the order given (a pasted list). They go one after another so they
@@ -28,7 +27,7 @@ export function useCreateSupplies(tutorialId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: async (inputs: CreateSupplyInput[]): Promise<AddedSupplies> => {
-      const added: Supply[] = [];
+      const added: SupplyDto[] = [];
       for (const input of inputs) {
         try {
           added.push(await createSupply({ tutorialId, ...input }));
@@ -46,10 +45,10 @@ export function useCreateSupplies(tutorialId: string) {
 export function useRestoreSupply(tutorialId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: async ({ id: _id, position, ...fields }: Supply) => {
+    mutationFn: async ({ id: _id, position, ...fields }: SupplyDto) => {
       const s = await createSupply({ tutorialId, ...fields, url: fields.url ?? undefined, discountCode: fields.discountCode ?? undefined });
       // Deleting leaves the other positions alone, so the old one is free again.
-      return api<Supply>(`/supplies/${s.id}`, { method: 'PATCH', body: { position } });
+      return api<SupplyDto>(`/supplies/${s.id}`, { method: 'PATCH', body: { position } });
     },
     onSettled: () => qc.invalidateQueries({ queryKey: supplyKeys.tutorial(tutorialId) }),
   });

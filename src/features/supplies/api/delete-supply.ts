@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { supplyKeys } from './keys';
-import type { SuppliesResponse } from './types';
+import type { SuppliesDto } from '@shared/schemas/supply';
 
 /** Deletes a supply (204). */
 export const deleteSupply = (id: string) => api<void>(`/supplies/${id}`, { method: 'DELETE' });
@@ -14,8 +14,8 @@ export function useDeleteSupply(tutorialId: string) {
     mutationFn: deleteSupply,
     onMutate: async (id) => {
       await qc.cancelQueries({ queryKey: key });
-      const before = qc.getQueryData<SuppliesResponse>(key);
-      qc.setQueryData<SuppliesResponse>(key, (old) => (old ? { ...old, supplies: old.supplies.filter((s) => s.id !== id) } : old));
+      const before = qc.getQueryData<SuppliesDto>(key);
+      qc.setQueryData<SuppliesDto>(key, (old) => (old ? { ...old, supplies: old.supplies.filter((s) => s.id !== id) } : old));
       return { before };
     },
     onError: (_e, _id, ctx) => {

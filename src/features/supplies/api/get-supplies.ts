@@ -1,10 +1,5 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
-import { supplyKeys } from './keys';
-import type { SuppliesResponse } from './types';
+import { useQuery } from '@tanstack/react-query';
+import { suppliesQueryOptions } from '@/lib/resources';
 
-/** A tutorial's supplies in list order, the disclosure that goes with them and the caller's abilities. */
-export const getSupplies = (tutorialId: string) => api<SuppliesResponse>(`/tutorials/${tutorialId}/supplies`);
-export const suppliesQueryOptions = (tutorialId: string) =>
-  queryOptions({ queryKey: supplyKeys.tutorial(tutorialId), queryFn: () => getSupplies(tutorialId) });
+/** A tutorial's supplies, their disclosure and the caller's abilities (the shared read the write-up's live list uses too). */
 export const useSupplies = (tutorialId: string) => useQuery(suppliesQueryOptions(tutorialId));

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { supplyKeys } from './keys';
-import type { SuppliesResponse, Supply } from './types';
+import type { SuppliesDto, SupplyDto } from '@shared/schemas/supply';
 import { updateSupply } from './update-supply';
 import { positionChanges } from '../utils/supply-order';
 
@@ -17,13 +17,13 @@ export function useReorderSupplies(tutorialId: string) {
   return useMutation({
     mutationKey,
     scope: { id: mutationKey.join('/') },
-    mutationFn: async (ordered: Supply[]) => {
+    mutationFn: async (ordered: SupplyDto[]) => {
       for (const c of positionChanges(ordered)) await updateSupply(c);
     },
     onMutate: async (ordered) => {
       await qc.cancelQueries({ queryKey: key });
-      const before = qc.getQueryData<SuppliesResponse>(key);
-      qc.setQueryData<SuppliesResponse>(key, (old) => (old ? { ...old, supplies: ordered.map((s, i) => ({ ...s, position: i })) } : old));
+      const before = qc.getQueryData<SuppliesDto>(key);
+      qc.setQueryData<SuppliesDto>(key, (old) => (old ? { ...old, supplies: ordered.map((s, i) => ({ ...s, position: i })) } : old));
       return { before };
     },
     onError: (_e, _v, ctx) => {

@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { supplyKeys } from './keys';
-import type { SuppliesResponse, Supply, SupplyChange } from './types';
+import type { SuppliesDto, SupplyDto, UpdateSupplyInput } from '@shared/schemas/supply';
 
 /** Changes some of a supply's fields or its position (400 with field issues). */
-export const updateSupply = ({ id, ...change }: SupplyChange & { id: string }) => api<Supply>(`/supplies/${id}`, { method: 'PATCH', body: change });
+export const updateSupply = ({ id, ...change }: UpdateSupplyInput & { id: string }) => api<SupplyDto>(`/supplies/${id}`, { method: 'PATCH', body: change });
 
-const replace = (old: SuppliesResponse | undefined, s: Supply) => (old ? { ...old, supplies: old.supplies.map((x) => (x.id === s.id ? s : x)) } : old);
+const replace = (old: SuppliesDto | undefined, s: SupplyDto) => (old ? { ...old, supplies: old.supplies.map((x) => (x.id === s.id ? s : x)) } : old);
 
 /**
  * Saves a change to one supply. The row shows the change at once (a ticked box stays ticked) and
@@ -20,16 +20,16 @@ export function useUpdateSupply(tutorialId: string) {
     mutationFn: updateSupply,
     onMutate: async ({ id, ...change }) => {
       await qc.cancelQueries({ queryKey: key });
-      const before = qc.getQueryData<SuppliesResponse>(key);
+      const before = qc.getQueryData<SuppliesDto>(key);
       const current = before?.supplies.find((s) => s.id === id);
-      if (current) qc.setQueryData<SuppliesResponse>(key, (old) => replace(old, { ...current, ...change }));
+      if (current) qc.setQueryData<SuppliesDto>(key, (old) => replace(old, { ...current, ...change }));
       return { before };
     },
     onError: (_e, _v, ctx) => {
       if (ctx?.before) qc.setQueryData(key, ctx.before);
     },
     onSuccess: (s) => {
-      qc.setQueryData<SuppliesResponse>(key, (old) => replace(old, s));
+      qc.setQueryData<SuppliesDto>(key, (old) => replace(old, s));
     },
     onSettled: () => qc.invalidateQueries({ queryKey: key }),
   });

@@ -14,10 +14,10 @@ const EMPTY: Values = { category: 'other', name: '', quantity: '', note: '', url
 const schemaResolver = zodResolver(createSupplySchema);
 // A blank link or code is no link or code, not an invalid one.
 const blank = (v: string | null | undefined) => (v?.trim() ? v : undefined);
-const resolver: typeof schemaResolver = (values, context, options) => schemaResolver({ ...values, url: blank(values.url), discountCode: blank(values.discountCode) }, context, options);
+const resolver: typeof schemaResolver = (values, context, options) =>
+  schemaResolver({ ...values, url: blank(values.url), discountCode: blank(values.discountCode) }, context, options);
 
-const inputCls = (error: unknown) =>
-  `w-full min-w-0 rounded border bg-white px-2 py-1 text-sm outline-none focus:border-kraft ${error ? 'border-rosehip' : 'border-line'}`;
+const inputCls = (error: unknown) => `w-full min-w-0 rounded border bg-white px-2 py-1 text-sm focus:border-kraft ${error ? 'border-rosehip' : 'border-field'}`;
 
 function Err({ id, message }: { id: string; message?: string }) {
   if (!message) return null;
@@ -27,6 +27,9 @@ function Err({ id, message }: { id: string; message?: string }) {
     </p>
   );
 }
+
+// Column names beside the fields when a phone shows the row as a card (.stack-table).
+const COLUMN = { name: 'Name', quantity: 'Quantity', note: 'Note', url: 'Shop link', discountCode: 'Discount code' } as const;
 
 /**
  * The table's last row: a new supply typed straight into the columns. Enter adds it and puts the
@@ -78,7 +81,7 @@ export function AddSupplyRow({ tutorialId, columns }: { tutorialId: string; colu
 
   const described = (field: string, error: unknown) => (error ? `${ids}-${field}` : undefined);
   const field = (key: 'name' | 'quantity' | 'note' | 'url' | 'discountCode', label: string, placeholder: string, extra: Record<string, unknown> = {}) => (
-    <td className="px-2 py-2 align-top">
+    <td className="px-2 py-2 align-top" data-label={COLUMN[key]}>
       <input
         form={formId}
         aria-label={label}
@@ -97,8 +100,13 @@ export function AddSupplyRow({ tutorialId, columns }: { tutorialId: string; colu
     <tfoot>
       <tr className="border-t-2 border-dashed border-kraft/40 bg-kraft-light/30">
         {columns.order && <td className="px-2 py-2 align-top text-xs font-medium text-kraft-dark">New</td>}
-        <td className="px-2 py-2 align-top">
-          <select form={formId} aria-label="New supply category" className="w-full rounded border border-line bg-white px-1 py-1 text-sm focus:border-kraft" {...register('category')}>
+        <td className="px-2 py-2 align-top" data-label="Category">
+          <select
+            form={formId}
+            aria-label="New supply category"
+            className="w-full rounded border border-field bg-white px-1 py-1 text-sm focus:border-kraft"
+            {...register('category')}
+          >
             {SUPPLY_CATEGORIES.map((c) => (
               <option key={c} value={c}>
                 {SUPPLY_CATEGORY_LABELS[c]}
@@ -110,7 +118,7 @@ export function AddSupplyRow({ tutorialId, columns }: { tutorialId: string; colu
         {field('quantity', 'New supply quantity', '2 sheets', { maxLength: 60, autoComplete: 'off' })}
         {field('note', 'New supply note', 'what it is for', { maxLength: 500, autoComplete: 'off' })}
         {field('url', 'New supply shop link', 'https://…', { type: 'url', autoComplete: 'off' })}
-        <td className="px-2 py-2 text-center align-top">
+        <td className="px-2 py-2 text-center align-top" data-label="Sponsored">
           <input
             form={formId}
             type="checkbox"

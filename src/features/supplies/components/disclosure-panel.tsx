@@ -1,7 +1,6 @@
 import { useEffect, useId, useRef, useState } from 'react';
-import { disclosureSchema } from '@shared/schemas/supply';
+import { disclosureSchema, type DisclosureDto } from '@shared/schemas/supply';
 import { Button } from '@/components/ui/button';
-import type { Disclosure } from '../api/types';
 import { useUpdateDisclosure } from '../api/update-disclosure';
 
 /**
@@ -9,7 +8,7 @@ import { useUpdateDisclosure } from '../api/update-disclosure';
  * with the supplies, which the maker may rewrite or return to the default; otherwise a quiet note
  * says one will be needed.
  */
-export function DisclosurePanel({ tutorialId, disclosure, canEdit }: { tutorialId: string; disclosure: Disclosure; canEdit: boolean }) {
+export function DisclosurePanel({ tutorialId, disclosure, canEdit }: { tutorialId: string; disclosure: DisclosureDto; canEdit: boolean }) {
   if (!disclosure.required) {
     return (
       <p className="text-sm text-pencil">
@@ -24,8 +23,7 @@ export function DisclosurePanel({ tutorialId, disclosure, canEdit }: { tutorialI
         Sponsorship disclosure
       </h3>
       <p className="mt-1 text-sm text-pencil">
-        At least one shop link is sponsored, so this note appears with the supplies in the write-up and in the exports (blog post, handout, video
-        description).
+        At least one shop link is sponsored, so this note appears with the supplies in the write-up and in the exports (blog post, handout, video description).
       </p>
       {canEdit ? (
         <DisclosureEditor tutorialId={tutorialId} disclosure={disclosure} />
@@ -36,7 +34,7 @@ export function DisclosurePanel({ tutorialId, disclosure, canEdit }: { tutorialI
   );
 }
 
-function DisclosureEditor({ tutorialId, disclosure }: { tutorialId: string; disclosure: Disclosure }) {
+function DisclosureEditor({ tutorialId, disclosure }: { tutorialId: string; disclosure: DisclosureDto }) {
   const id = useId();
   const save = useUpdateDisclosure(tutorialId);
   const [text, setText] = useState(disclosure.text);
@@ -93,7 +91,7 @@ function DisclosureEditor({ tutorialId, disclosure }: { tutorialId: string; disc
         onChange={(e) => setText(e.target.value)}
         aria-invalid={error ? true : undefined}
         aria-describedby={error ? `${id}-error` : undefined}
-        className={`w-full resize-y rounded-md border bg-white px-3 py-2 text-sm outline-none focus:border-kraft ${error ? 'border-rosehip' : 'border-line'}`}
+        className={`w-full resize-y rounded-md border bg-white px-3 py-2 text-sm focus:border-kraft ${error ? 'border-rosehip' : 'border-field'}`}
       />
       {error && (
         <p id={`${id}-error`} role="alert" className="text-xs text-rosehip">

@@ -53,7 +53,7 @@ export function EditableCell({ field, label, value, display, canEdit, check, onS
           onKeyDown={edit.onKeyDown}
           onBlur={edit.onBlur}
           aria-busy={saving || undefined}
-          className={`w-full min-w-0 rounded border bg-white px-2 py-1 text-sm outline-none focus:border-kraft ${error ? 'border-rosehip' : 'border-kraft/60'}`}
+          className={`w-full min-w-0 rounded border bg-white px-2 py-1 text-sm focus:border-kraft ${error ? 'border-rosehip' : 'border-kraft/60'}`}
         />
         {error && (
           <p id={errorId} role="alert" className="mt-1 text-xs text-rosehip">

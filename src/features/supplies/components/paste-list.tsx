@@ -1,9 +1,8 @@
 import { useId, useState } from 'react';
-import { SUPPLY_CATEGORIES, SUPPLY_CATEGORY_LABELS } from '@shared/schemas/supply';
+import { SUPPLY_CATEGORIES, SUPPLY_CATEGORY_LABELS, type SupplyCategory } from '@shared/schemas/supply';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useCreateSupplies } from '../api/create-supply';
-import type { SupplyCategory } from '../api/types';
 import { parseSupplyLines, type ParsedLine } from '../utils/parse-supply-lines';
 import { shopHost } from '../utils/shop-host';
 import { fieldError } from './editable-cell';
@@ -34,7 +33,12 @@ export function PasteList({ tutorialId, onClose }: { tutorialId: string; onClose
   };
   const chosen = rows?.filter((r) => r.include && r.supply && !r.problem) ?? [];
   const confirm = async () => {
-    const inputs = chosen.map((r) => ({ ...r.supply!, category: r.category, url: r.supply!.url ?? undefined, discountCode: r.supply!.discountCode ?? undefined }));
+    const inputs = chosen.map((r) => ({
+      ...r.supply!,
+      category: r.category,
+      url: r.supply!.url ?? undefined,
+      discountCode: r.supply!.discountCode ?? undefined,
+    }));
     const { added, refused } = await add.mutateAsync(inputs);
     if (!refused) {
       setRows(null);
@@ -61,8 +65,8 @@ export function PasteList({ tutorialId, onClose }: { tutorialId: string; onClose
       {!rows ? (
         <div className="mt-2 space-y-2">
           <label htmlFor={`${id}-text`} className="block text-sm text-pencil">
-            One supply a line. A number or amount at the start becomes the quantity, a web address becomes the shop link, text after “ - ” becomes the note;
-            the category is guessed from the name. You can check everything before it is added.
+            One supply a line. A number or amount at the start becomes the quantity, a web address becomes the shop link, text after “ - ” becomes the note; the
+            category is guessed from the name. You can check everything before it is added.
           </label>
           <textarea
             id={`${id}-text`}
@@ -70,7 +74,7 @@ export function PasteList({ tutorialId, onClose }: { tutorialId: string; onClose
             value={text}
             onChange={(e) => setText(e.target.value)}
             placeholder={EXAMPLE}
-            className="w-full resize-y rounded-md border border-line bg-white px-3 py-2 font-mono text-sm outline-none focus:border-kraft"
+            className="w-full resize-y rounded-md border border-field bg-white px-3 py-2 font-mono text-sm focus:border-kraft"
           />
           <div className="flex items-center gap-2">
             <Button size="sm" onClick={read} disabled={!text.trim()}>
@@ -80,7 +84,9 @@ export function PasteList({ tutorialId, onClose }: { tutorialId: string; onClose
         </div>
       ) : (
         <div className="mt-2 space-y-3">
-          <p className="text-sm text-pencil">Check the rows; untick any you do not want and fix a category if the guess is wrong. Everything stays editable in the table.</p>
+          <p className="text-sm text-pencil">
+            Check the rows; untick any you do not want and fix a category if the guess is wrong. Everything stays editable in the table.
+          </p>
           <table className="w-full text-left text-sm" aria-label="Rows read from the pasted list">
             <thead className="text-xs text-pencil">
               <tr>
@@ -113,7 +119,7 @@ export function PasteList({ tutorialId, onClose }: { tutorialId: string; onClose
                           aria-label={`Category of line ${r.line}`}
                           value={r.category}
                           onChange={(e) => setRows((rs) => rs!.map((x) => (x === r ? { ...x, category: e.target.value as SupplyCategory } : x)))}
-                          className="rounded border border-line bg-white px-1 py-0.5 text-sm"
+                          className="rounded border border-field bg-white px-1 py-0.5 text-sm"
                         >
                           {SUPPLY_CATEGORIES.map((c) => (
                             <option key={c} value={c}>
@@ -130,7 +136,10 @@ export function PasteList({ tutorialId, onClose }: { tutorialId: string; onClose
                     </>
                   ) : (
                     <td colSpan={6} className="px-2 py-1.5 align-top">
-                      <span className="text-pencil">Line {r.line}: “{r.text}”</span> — <span className="text-rosehip">{r.problem}; it will not be added.</span>
+                      <span className="text-pencil">
+                        Line {r.line}: “{r.text}”
+                      </span>{' '}
+                      — <span className="text-rosehip">{r.problem}; it will not be added.</span>
                     </td>
                   )}
                 </tr>

@@ -7,11 +7,12 @@ import { useRestoreSupply } from '../api/create-supply';
 import { useDeleteSupply } from '../api/delete-supply';
 import { useSupplies } from '../api/get-supplies';
 import { useReorderSupplies } from '../api/reorder-supplies';
-import type { Supply, SupplyChange } from '../api/types';
+import type { SupplyDto, UpdateSupplyInput } from '@shared/schemas/supply';
 import { useUpdateSupply } from '../api/update-supply';
 import { groupByCategory, moveSupply } from '../utils/supply-order';
 import { DisclosurePanel } from './disclosure-panel';
 import { PasteList } from './paste-list';
+import { SheetChecksPanel } from './sheet-checks-panel';
 import { SuppliesTable } from './supplies-table';
 import { UndoBar } from './undo-bar';
 
@@ -27,15 +28,15 @@ export function SuppliesSection({ tutorialId, canEdit: tutorialCanEdit }: { tuto
   const restore = useRestoreSupply(tutorialId);
   const [grouped, setGrouped] = useState(true);
   const [pasting, setPasting] = useState(false);
-  const [deleted, setDeleted] = useState<Supply | null>(null);
+  const [deleted, setDeleted] = useState<SupplyDto | null>(null);
   const [problem, setProblem] = useState<string | null>(null);
   const box = useRef<HTMLDivElement>(null);
   // Which control gets the focus once a move or a delete has changed the rows (not before).
-  const focusNext = useRef<{ key: string; from: Supply[] } | null>(null);
+  const focusNext = useRef<{ key: string; from: SupplyDto[] } | null>(null);
 
   const supplies = q.data?.supplies;
   const updateAsync = update.mutateAsync;
-  const onChange = useCallback((id: string, change: SupplyChange) => updateAsync({ id, ...change }), [updateAsync]);
+  const onChange = useCallback((id: string, change: UpdateSupplyInput) => updateAsync({ id, ...change }), [updateAsync]);
 
   const onMove = useCallback(
     (id: string, step: -1 | 1) => {
@@ -50,7 +51,7 @@ export function SuppliesSection({ tutorialId, canEdit: tutorialCanEdit }: { tuto
   );
 
   const onDelete = useCallback(
-    (s: Supply) => {
+    (s: SupplyDto) => {
       if (!supplies) return;
       const shown = grouped ? groupByCategory(supplies).flatMap((g) => g.items) : supplies;
       const i = shown.findIndex((x) => x.id === s.id);
@@ -142,6 +143,8 @@ export function SuppliesSection({ tutorialId, canEdit: tutorialCanEdit }: { tuto
           onChange={onChange}
         />
       )}
+
+      <SheetChecksPanel tutorialId={tutorialId} canEdit={canEdit} where="supplies" />
 
       <hr className="score-rule" />
       <DisclosurePanel tutorialId={tutorialId} disclosure={q.data.disclosure} canEdit={canEdit} />

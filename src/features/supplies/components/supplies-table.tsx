@@ -1,17 +1,18 @@
 import { Fragment } from 'react';
-import type { Supply, SupplyChange } from '../api/types';
+import type { SupplyDto, UpdateSupplyInput } from '@shared/schemas/supply';
+import { ScrollArea } from '@/components/ui/scroll-area';
 import { canMove, groupByCategory } from '../utils/supply-order';
 import { AddSupplyRow } from './add-supply-row';
 import { SupplyRow } from './supply-row';
 
 type Props = {
   tutorialId: string;
-  supplies: Supply[];
+  supplies: SupplyDto[];
   grouped: boolean;
   canEdit: boolean;
   onMove: (id: string, step: -1 | 1) => void;
-  onDelete: (supply: Supply) => void;
-  onChange: (id: string, change: SupplyChange) => Promise<unknown>;
+  onDelete: (supply: SupplyDto) => void;
+  onChange: (id: string, change: UpdateSupplyInput) => Promise<unknown>;
 };
 
 const th = 'px-2 py-2 text-left text-xs font-semibold uppercase tracking-wide text-pencil';
@@ -22,7 +23,7 @@ const th = 'px-2 py-2 text-left text-xs font-semibold uppercase tracking-wide te
  */
 export function SuppliesTable({ tutorialId, supplies, grouped, canEdit, onMove, onDelete, onChange }: Props) {
   const columns = canEdit ? 9 : 7;
-  const row = (s: Supply) => (
+  const row = (s: SupplyDto) => (
     <SupplyRow
       key={s.id}
       supply={s}
@@ -35,8 +36,8 @@ export function SuppliesTable({ tutorialId, supplies, grouped, canEdit, onMove, 
     />
   );
   return (
-    <div className="overflow-x-auto rounded-lg border border-line bg-white/60">
-      <table className="w-full table-fixed border-collapse text-sm" aria-label="Supplies">
+    <ScrollArea label="Supplies table" className="sm:rounded-lg sm:border sm:border-line sm:bg-white/60">
+      <table className="stack-table w-full table-fixed sm:min-w-[76rem] border-collapse text-sm" aria-label="Supplies">
         <colgroup>
           {canEdit && <col className="w-[4.5rem]" />}
           <col className="w-36" />
@@ -87,7 +88,7 @@ export function SuppliesTable({ tutorialId, supplies, grouped, canEdit, onMove, 
           groupByCategory(supplies).map((g) => (
             <Fragment key={g.category}>
               <tbody aria-label={g.label}>
-                <tr className="border-t border-line bg-paper">
+                <tr className="stack-group border-t border-line bg-paper">
                   <th scope="colgroup" colSpan={columns} className="px-3 pb-1 pt-3 text-left font-serif text-sm font-bold text-kraft-dark">
                     {g.label} <span className="font-sans text-xs font-normal text-pencil">· {g.items.length}</span>
                   </th>
@@ -101,6 +102,6 @@ export function SuppliesTable({ tutorialId, supplies, grouped, canEdit, onMove, 
         )}
         {canEdit && <AddSupplyRow tutorialId={tutorialId} columns={{ order: true }} />}
       </table>
-    </div>
+    </ScrollArea>
   );
 }

@@ -1,6 +1,12 @@
 import { memo, useState } from 'react';
-import { SUPPLY_CATEGORIES, SUPPLY_CATEGORY_LABELS, updateSupplySchema } from '@shared/schemas/supply';
-import type { Supply, SupplyCategory, SupplyChange } from '../api/types';
+import {
+  SUPPLY_CATEGORIES,
+  SUPPLY_CATEGORY_LABELS,
+  updateSupplySchema,
+  type SupplyDto,
+  type SupplyCategory,
+  type UpdateSupplyInput,
+} from '@shared/schemas/supply';
 import { shopHost } from '../utils/shop-host';
 import { EditableCell, fieldError } from './editable-cell';
 
@@ -19,20 +25,20 @@ const empty = <span className="text-pencil/70">—</span>;
 const cell = 'px-2 py-1.5 align-top';
 
 type Props = {
-  supply: Supply;
+  supply: SupplyDto;
   canEdit: boolean;
   canUp: boolean;
   canDown: boolean;
   onMove: (id: string, step: -1 | 1) => void;
-  onDelete: (supply: Supply) => void;
-  onChange: (id: string, change: SupplyChange) => Promise<unknown>;
+  onDelete: (supply: SupplyDto) => void;
+  onChange: (id: string, change: UpdateSupplyInput) => Promise<unknown>;
 };
 
 /** One supply in the table: each cell edits in place; the row moves up or down and deletes. */
 export const SupplyRow = memo(function SupplyRow({ supply: s, canEdit, canUp, canDown, onMove, onDelete, onChange }: Props) {
   const [error, setError] = useState<{ field: string; message: string } | null>(null);
   // A ticked box or a picked category shows at once, before the server answers; a refusal puts the stored value back.
-  const [pending, setPending] = useState<Pick<SupplyChange, 'category' | 'sponsored'>>({});
+  const [pending, setPending] = useState<Pick<UpdateSupplyInput, 'category' | 'sponsored'>>({});
   const host = shopHost(s.url);
   const save = (field: TextField) => (text: string) => onChange(s.id, { [field]: toValue(field, text) });
   const text = (field: TextField, label: string, opts: { placeholder?: string; maxLength?: number } = {}) => (
@@ -48,7 +54,7 @@ export const SupplyRow = memo(function SupplyRow({ supply: s, canEdit, canUp, ca
       {...opts}
     />
   );
-  const immediate = (change: Pick<SupplyChange, 'category' | 'sponsored'>, field: string) => {
+  const immediate = (change: Pick<UpdateSupplyInput, 'category' | 'sponsored'>, field: string) => {
     setError(null);
     setPending((p) => ({ ...p, ...change }));
     onChange(s.id, change)
@@ -59,7 +65,13 @@ export const SupplyRow = memo(function SupplyRow({ supply: s, canEdit, canUp, ca
   const sponsored = pending.sponsored ?? s.sponsored;
 
   const link = host ? (
-    <a href={s.url!} target="_blank" rel="noopener" className="text-sm text-kraft-dark underline decoration-kraft/40 underline-offset-2 hover:decoration-kraft" title={s.url!}>
+    <a
+      href={s.url!}
+      target="_blank"
+      rel="noopener"
+      className="text-sm text-kraft-dark underline decoration-kraft/40 underline-offset-2 hover:decoration-kraft"
+      title={s.url!}
+    >
       {host}
       <span className="sr-only"> (opens in a new tab)</span>
       <span aria-hidden> ↗</span>
@@ -73,20 +85,20 @@ export const SupplyRow = memo(function SupplyRow({ supply: s, canEdit, canUp, ca
   return (
     <tr className="border-t border-line hover:bg-white/70" data-supply-id={s.id}>
       {canEdit && (
-        <td className={`${cell} whitespace-nowrap`}>
+        <td className={`${cell} whitespace-nowrap`} data-label="Order">
           <span className="inline-flex gap-0.5">
             <MoveButton label={`Move “${s.name}” up`} glyph="↑" focusKey={`${s.id}:up`} disabled={!canUp} onClick={() => onMove(s.id, -1)} />
             <MoveButton label={`Move “${s.name}” down`} glyph="↓" focusKey={`${s.id}:down`} disabled={!canDown} onClick={() => onMove(s.id, 1)} />
           </span>
         </td>
       )}
-      <td className={cell}>
+      <td className={cell} data-label="Category">
         {canEdit ? (
           <select
             aria-label={`Category of ${s.name}`}
             value={category}
             onChange={(e) => immediate({ category: e.target.value as SupplyCategory }, 'category')}
-            className="w-full rounded border border-transparent bg-transparent px-1 py-1 text-sm hover:border-line focus:border-kraft"
+            className="w-full rounded border border-transparent bg-transparent px-1 py-1 text-sm hover:border-field focus:border-kraft"
           >
             {SUPPLY_CATEGORIES.map((c) => (
               <option key={c} value={c}>
@@ -99,10 +111,16 @@ export const SupplyRow = memo(function SupplyRow({ supply: s, canEdit, canUp, ca
         )}
         <RowError error={error} field="category" />
       </td>
-      <td className={`${cell} font-medium`}>{text('name', 'Name', { maxLength: 200 })}</td>
-      <td className={cell}>{text('quantity', 'Quantity', { maxLength: 60, placeholder: 'e.g. 2 sheets' })}</td>
-      <td className={cell}>{text('note', 'Note', { maxLength: 500 })}</td>
-      <td className={cell}>
+      <td className={`${cell} font-medium`} data-label="Name">
+        {text('name', 'Name', { maxLength: 200 })}
+      </td>
+      <td className={cell} data-label="Quantity">
+        {text('quantity', 'Quantity', { maxLength: 60, placeholder: 'e.g. 2 sheets' })}
+      </td>
+      <td className={cell} data-label="Note">
+        {text('note', 'Note', { maxLength: 500 })}
+      </td>
+      <td className={cell} data-label="Shop link">
         {canEdit ? (
           <EditableCell
             field="url"
@@ -121,7 +139,7 @@ export const SupplyRow = memo(function SupplyRow({ supply: s, canEdit, canUp, ca
           link
         )}
       </td>
-      <td className={`${cell} text-center`}>
+      <td className={`${cell} text-center`} data-label="Sponsored">
         {canEdit ? (
           <input
             type="checkbox"
@@ -137,7 +155,9 @@ export const SupplyRow = memo(function SupplyRow({ supply: s, canEdit, canUp, ca
         )}
         <RowError error={error} field="sponsored" />
       </td>
-      <td className={cell}>{text('discountCode', 'Discount code', { maxLength: 60 })}</td>
+      <td className={cell} data-label="Discount code">
+        {text('discountCode', 'Discount code', { maxLength: 60 })}
+      </td>
       {canEdit && (
         <td className={`${cell} text-right`}>
           <button

@@ -11,10 +11,11 @@ export function UndoBar({ name, onUndo, onDone }: { name: string; onUndo: () => 
     return () => clearTimeout(t);
   }, []);
   return (
-    <div role="status" className="fixed bottom-6 left-1/2 z-20 flex -translate-x-1/2 items-center gap-4 rounded-lg bg-ink px-4 py-3 text-sm text-white shadow-lg">
-      <span>
-        Deleted “{name}”.
-      </span>
+    <div
+      role="status"
+      className="fixed bottom-6 left-1/2 z-20 flex -translate-x-1/2 items-center gap-4 rounded-lg bg-ink px-4 py-3 text-sm text-white shadow-lg"
+    >
+      <span>Deleted “{name}”.</span>
       <button type="button" onClick={onUndo} className="rounded px-2 py-1 font-medium text-kraft-light underline underline-offset-2 hover:bg-white/10">
         Undo
       </button>

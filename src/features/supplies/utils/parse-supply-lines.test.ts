@@ -62,9 +62,22 @@ describe('parseSupplyLine', () => {
   });
 
   it('splits off the shop link, wherever it sits on the line', () => {
-    expect(parseSupplyLine('liquid glue - https://shop.example/glue').supply).toMatchObject({ name: 'Liquid glue', url: 'https://shop.example/glue', category: 'adhesive', note: '' });
-    expect(parseSupplyLine('https://shop.example/vellum 2 sheets vellum').supply).toMatchObject({ name: 'Vellum', quantity: '2 sheets', url: 'https://shop.example/vellum' });
-    expect(parseSupplyLine('foam tape (https://shop.example/foam-tape)').supply).toMatchObject({ name: 'Foam tape', url: 'https://shop.example/foam-tape', note: '' });
+    expect(parseSupplyLine('liquid glue - https://shop.example/glue').supply).toMatchObject({
+      name: 'Liquid glue',
+      url: 'https://shop.example/glue',
+      category: 'adhesive',
+      note: '',
+    });
+    expect(parseSupplyLine('https://shop.example/vellum 2 sheets vellum').supply).toMatchObject({
+      name: 'Vellum',
+      quantity: '2 sheets',
+      url: 'https://shop.example/vellum',
+    });
+    expect(parseSupplyLine('foam tape (https://shop.example/foam-tape)').supply).toMatchObject({
+      name: 'Foam tape',
+      url: 'https://shop.example/foam-tape',
+      note: '',
+    });
     expect(parseSupplyLine('foam tape: www.shop.example/foam').supply).toMatchObject({ name: 'Foam tape', url: 'https://www.shop.example/foam' });
     expect(parseSupplyLine('[Scoring board](https://shop.example/board) for the walls').supply).toMatchObject({
       name: 'Scoring board for the walls',
@@ -81,7 +94,10 @@ describe('parseSupplyLine', () => {
   });
 
   it('splits off a discount code written with "code:" or "discount code"', () => {
-    expect(parseSupplyLine('kraft cardstock https://shop.example/kraft code: JUNIPER10').supply).toMatchObject({ name: 'Kraft cardstock', discountCode: 'JUNIPER10' });
+    expect(parseSupplyLine('kraft cardstock https://shop.example/kraft code: JUNIPER10').supply).toMatchObject({
+      name: 'Kraft cardstock',
+      discountCode: 'JUNIPER10',
+    });
     expect(parseSupplyLine('satin ribbon (discount code BOWS15)').supply).toMatchObject({ name: 'Satin ribbon', discountCode: 'BOWS15', note: '' });
     expect(parseSupplyLine('circle punch, use code ROUND5').supply).toMatchObject({ name: 'Circle punch', discountCode: 'ROUND5' });
     // "code" inside a name is left alone.
@@ -112,7 +128,13 @@ describe('parseSupplyLine', () => {
   });
 
   it('gives rows the create endpoint accepts (checked with the shared createSupplySchema)', () => {
-    const lines = ['2 sheets kraft cardstock', 'liquid glue - https://shop.example/glue', 'a few clear gems (for the lid)', '12 in paper trimmer', 'gold thread x 2'];
+    const lines = [
+      '2 sheets kraft cardstock',
+      'liquid glue - https://shop.example/glue',
+      'a few clear gems (for the lid)',
+      '12 in paper trimmer',
+      'gold thread x 2',
+    ];
     for (const l of lines) {
       const { supply, problem } = parseSupplyLine(l);
       expect(problem).toBeNull();

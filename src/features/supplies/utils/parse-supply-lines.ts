@@ -1,5 +1,4 @@
-import { createSupplySchema } from '@shared/schemas/supply';
-import type { SupplyCategory } from '../api/types';
+import { createSupplySchema, type SupplyCategory } from '@shared/schemas/supply';
 
 /** One supply read from a pasted line, in the shape the create endpoint takes. */
 export type ParsedSupply = {
@@ -19,21 +18,103 @@ export type ParsedLine = { line: number; text: string; supply: ParsedSupply | nu
 const WORDS: [string, SupplyCategory][] = [
   ...(
     [
-      'knife', 'knives', 'craft knife', 'trimmer', 'paper trimmer', 'scissors', 'snips', 'cutter', 'circle cutter', 'punch', 'bone folder', 'folder',
-      'scoring board', 'score board', 'scoring tool', 'scoring blade', 'ruler', 'cutting mat', 'self-healing mat', 'craft mat', 'stylus', 'awl', 'piercer',
-      'tweezers', 'compass', 'pencil', 'eraser', 'brayer', 'heat tool', 'glue gun', 'clip', 'bulldog clip', 'clothespin', 'clamp', 'die', 'stamp',
-      'cutting machine', 'guillotine', 'blade', 'burnisher', 'spatula', 'brush', 'stencil', 'embossing folder',
+      'knife',
+      'knives',
+      'craft knife',
+      'trimmer',
+      'paper trimmer',
+      'scissors',
+      'snips',
+      'cutter',
+      'circle cutter',
+      'punch',
+      'bone folder',
+      'folder',
+      'scoring board',
+      'score board',
+      'scoring tool',
+      'scoring blade',
+      'ruler',
+      'cutting mat',
+      'self-healing mat',
+      'craft mat',
+      'stylus',
+      'awl',
+      'piercer',
+      'tweezers',
+      'compass',
+      'pencil',
+      'eraser',
+      'brayer',
+      'heat tool',
+      'glue gun',
+      'clip',
+      'bulldog clip',
+      'clothespin',
+      'clamp',
+      'die',
+      'stamp',
+      'cutting machine',
+      'guillotine',
+      'blade',
+      'burnisher',
+      'spatula',
+      'brush',
+      'stencil',
+      'embossing folder',
     ] as const
   ).map((w): [string, SupplyCategory] => [w, 'tool']),
-  ...(['glue', 'glue stick', 'glue dot', 'tape', 'double-sided tape', 'foam tape', 'adhesive', 'foam dot', 'foam square', 'foam pad', 'mounting tape', 'paste'] as const).map(
-    (w): [string, SupplyCategory] => [w, 'adhesive'],
+  ...(
+    [
+      'glue',
+      'glue stick',
+      'glue dot',
+      'tape',
+      'double-sided tape',
+      'foam tape',
+      'adhesive',
+      'foam dot',
+      'foam square',
+      'foam pad',
+      'mounting tape',
+      'paste',
+    ] as const
+  ).map((w): [string, SupplyCategory] => [w, 'adhesive']),
+  ...(['cardstock', 'card stock', 'cover stock', 'chipboard', 'cardboard', 'card base', 'card blank', 'card panel'] as const).map(
+    (w): [string, SupplyCategory] => [w, 'cardstock'],
   ),
-  ...(['cardstock', 'card stock', 'cover stock', 'chipboard', 'cardboard', 'card base', 'card blank', 'card panel'] as const).map((w): [string, SupplyCategory] => [w, 'cardstock']),
   ...(['paper', 'vellum', 'tissue', 'acetate', 'paper pad', 'designer paper', 'patterned paper'] as const).map((w): [string, SupplyCategory] => [w, 'paper']),
   ...(
     [
-      'ribbon', 'gem', 'rhinestone', 'jewel', 'sequin', 'pearl', 'enamel dot', 'button', 'brad', 'eyelet', 'twine', 'string', 'cord', 'lace', 'sticker',
-      'washi', 'washi tape', 'flower', 'charm', 'glitter', 'bow', 'tag', 'die cut', 'die-cut', 'ephemera', 'embossing powder', 'bead', 'tassel', 'sentiment',
+      'ribbon',
+      'gem',
+      'rhinestone',
+      'jewel',
+      'sequin',
+      'pearl',
+      'enamel dot',
+      'button',
+      'brad',
+      'eyelet',
+      'twine',
+      'string',
+      'cord',
+      'lace',
+      'sticker',
+      'washi',
+      'washi tape',
+      'flower',
+      'charm',
+      'glitter',
+      'bow',
+      'tag',
+      'die cut',
+      'die-cut',
+      'ephemera',
+      'embossing powder',
+      'bead',
+      'tassel',
+      'sentiment',
     ] as const
   ).map((w): [string, SupplyCategory] => [w, 'embellishment']),
 ];
@@ -43,7 +124,13 @@ const escape = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 const MATCHERS = WORDS.map(([phrase, category]) => ({
   phrase,
   category,
-  re: new RegExp(`(?<![a-z])${phrase.split(/[\s-]+/).map(escape).join('[\\s-]*')}(?:e?s)?(?![a-z])`, 'gi'),
+  re: new RegExp(
+    `(?<![a-z])${phrase
+      .split(/[\s-]+/)
+      .map(escape)
+      .join('[\\s-]*')}(?:e?s)?(?![a-z])`,
+    'gi',
+  ),
 }));
 
 function lastSupplyWord(text: string): SupplyCategory | null {
@@ -68,18 +155,58 @@ export function guessCategory(name: string): SupplyCategory {
   return lastSupplyWord(head) ?? lastSupplyWord(name) ?? 'other';
 }
 
-const UNICODE_FRACTIONS: Record<string, string> = { '½': '1/2', '⅓': '1/3', '⅔': '2/3', '¼': '1/4', '¾': '3/4', '⅛': '1/8', '⅜': '3/8', '⅝': '5/8', '⅞': '7/8' };
+const UNICODE_FRACTIONS: Record<string, string> = {
+  '½': '1/2',
+  '⅓': '1/3',
+  '⅔': '2/3',
+  '¼': '1/4',
+  '¾': '3/4',
+  '⅛': '1/8',
+  '⅜': '3/8',
+  '⅝': '5/8',
+  '⅞': '7/8',
+};
 const FRACTION_CHARS = Object.keys(UNICODE_FRACTIONS).join('');
 const NUMBER_WORDS: Record<string, string> = {
-  one: '1', two: '2', three: '3', four: '4', five: '5', six: '6', seven: '7', eight: '8', nine: '9', ten: '10', eleven: '11', twelve: '12',
-  fifteen: '15', twenty: '20', 'a dozen': '12', dozen: '12', 'a couple of': '2', 'a couple': '2', 'a pair of': '1 pair', 'pair of': '1 pair',
-  'half a': '1/2', half: '1/2', 'a few': 'a few', several: 'several', 'a handful of': 'a handful', 'a handful': 'a handful',
+  one: '1',
+  two: '2',
+  three: '3',
+  four: '4',
+  five: '5',
+  six: '6',
+  seven: '7',
+  eight: '8',
+  nine: '9',
+  ten: '10',
+  eleven: '11',
+  twelve: '12',
+  fifteen: '15',
+  twenty: '20',
+  'a dozen': '12',
+  dozen: '12',
+  'a couple of': '2',
+  'a couple': '2',
+  'a pair of': '1 pair',
+  'pair of': '1 pair',
+  'half a': '1/2',
+  half: '1/2',
+  'a few': 'a few',
+  several: 'several',
+  'a handful of': 'a handful',
+  'a handful': 'a handful',
 };
 const NUMBER = new RegExp(`^(\\d+\\s+\\d+/\\d+|\\d+/\\d+|\\d+(?:\\.\\d+)?\\s?[${FRACTION_CHARS}]|\\d+(?:\\.\\d+)?|[${FRACTION_CHARS}])`);
-const WORD_NUMBER = new RegExp(`^(${Object.keys(NUMBER_WORDS).sort((a, b) => b.length - a.length).map(escape).join('|')})(?![a-z])`, 'i');
+const WORD_NUMBER = new RegExp(
+  `^(${Object.keys(NUMBER_WORDS)
+    .sort((a, b) => b.length - a.length)
+    .map(escape)
+    .join('|')})(?![a-z])`,
+  'i',
+);
 const ARTICLE = /^(an?)\s+(?=\S)/i;
 // What a count or an amount is measured in; lengths are marked so a tool's size is not taken for an amount.
-const UNIT = /^(sheets?|pieces?|pcs?|strips?|packs?|packets?|pads?|rolls?|spools?|reels?|skeins?|bundles?|bottles?|tubes?|jars?|sets?|pairs?|bags?|sticks?|panels?|lengths?|yards?|yds?|feet|foot|ft|inch(?:es)?|in|cm|mm|metres?|meters?|m|"|”)(?![a-z])/i;
+const UNIT =
+  /^(sheets?|pieces?|pcs?|strips?|packs?|packets?|pads?|rolls?|spools?|reels?|skeins?|bundles?|bottles?|tubes?|jars?|sets?|pairs?|bags?|sticks?|panels?|lengths?|yards?|yds?|feet|foot|ft|inch(?:es)?|in|cm|mm|metres?|meters?|m|"|”)(?![a-z])/i;
 const LENGTH_UNIT = /^(yards?|yds?|feet|foot|ft|inch(?:es)?|in|cm|mm|metres?|meters?|m|"|”)$/i;
 // "12 x 12 in paper" starts with a size, not a count.
 const SIZE_AFTER_NUMBER = /^\s*(?:in(?:ch(?:es)?)?\b|cm\b|mm\b|["”])?\s*(?:x|×|by)\s*\d/i;
@@ -87,14 +214,16 @@ const SIZE_AFTER_NUMBER = /^\s*(?:in(?:ch(?:es)?)?\b|cm\b|mm\b|["”])?\s*(?:x|�
 const SPEC_AFTER_NUMBER = /^\s*(?:lbs?|#|gsm|g\/m2|g\/m²|g|pt|mil|%)(?![a-z])/i;
 
 const normalizeNumber = (n: string) =>
-  n.replace(new RegExp(`(\\d)\\s?([${FRACTION_CHARS}])`), (_m, d: string, f: string) => `${d} ${UNICODE_FRACTIONS[f]}`).replace(new RegExp(`[${FRACTION_CHARS}]`), (f) => UNICODE_FRACTIONS[f]!);
+  n
+    .replace(new RegExp(`(\\d)\\s?([${FRACTION_CHARS}])`), (_m, d: string, f: string) => `${d} ${UNICODE_FRACTIONS[f]}`)
+    .replace(new RegExp(`[${FRACTION_CHARS}]`), (f) => UNICODE_FRACTIONS[f]!);
 
 type Quantity = { quantity: string; rest: string; length: boolean };
 
 /** Reads a leading amount ("2 sheets of", "1½ yards", "a few", "3 x") off the front of a supply's text. */
 export function readLeadingQuantity(text: string): Quantity | null {
   let rest = text.trimStart();
-  let amount: string | null = null;
+  let amount: string;
   let article = false;
   const n = NUMBER.exec(rest);
   if (n) {
@@ -144,9 +273,21 @@ function trimUrl(raw: string): string {
 }
 
 const SEPARATORS = /^[\s\-–—:|,;]+|[\s\-–—:|,;]+$/g;
-const tidy = (s: string) => s.replace(/\(\s*\)|\[\s*\]|<\s*>/g, ' ').replace(/\s{2,}/g, ' ').replace(SEPARATORS, '').trim();
+const tidy = (s: string) =>
+  s
+    .replace(/\(\s*\)|\[\s*\]|<\s*>/g, ' ')
+    .replace(/\s{2,}/g, ' ')
+    .replace(SEPARATORS, '')
+    .trim();
 
-const FIELD_LABELS: Record<string, string> = { name: 'Name', quantity: 'Quantity', note: 'Note', url: 'Shop link', discountCode: 'Discount code', category: 'Category' };
+const FIELD_LABELS: Record<string, string> = {
+  name: 'Name',
+  quantity: 'Quantity',
+  note: 'Note',
+  url: 'Shop link',
+  discountCode: 'Discount code',
+  category: 'Category',
+};
 
 /**
  * Reads one pasted line ("2 sheets kraft cardstock", "liquid glue - https://shop.example/glue")
@@ -155,7 +296,10 @@ const FIELD_LABELS: Record<string, string> = { name: 'Name', quantity: 'Quantity
  * guessed from the name. A line that cannot be added says why.
  */
 export function parseSupplyLine(line: string): { supply: ParsedSupply | null; problem: string | null } {
-  let s = line.trim().replace(/^(?:[-*•·▪‣–—]|\d{1,3}[.)])\s+/, '').replace(/^\[[ xX]\]\s+/, '');
+  let s = line
+    .trim()
+    .replace(/^(?:[-*•·▪‣–—]|\d{1,3}[.)])\s+/, '')
+    .replace(/^\[[ xX]\]\s+/, '');
 
   let url: string | null = null;
   const md = /\[([^\]]+)\]\(((?:https?:\/\/|www\.)[^)\s]+)\)/i.exec(s);

@@ -16,7 +16,11 @@ export function groupByCategory<T extends Ordered>(supplies: readonly T[]): { ca
   for (const s of supplies) groups.set(s.category, [...(groups.get(s.category) ?? []), s]);
   return [...groups.entries()]
     .sort(([a], [b]) => rank(a) - rank(b) || a.localeCompare(b))
-    .map(([category, items]) => ({ category, label: CATEGORY_LABELS[category] ?? SUPPLY_CATEGORY_LABELS[category as keyof typeof SUPPLY_CATEGORY_LABELS] ?? category, items }));
+    .map(([category, items]) => ({
+      category,
+      label: CATEGORY_LABELS[category] ?? SUPPLY_CATEGORY_LABELS[category as keyof typeof SUPPLY_CATEGORY_LABELS] ?? category,
+      items,
+    }));
 }
 
 /**

@@ -1,16 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { CreateTutorialInput, UpdateTutorialInput } from '@shared/schemas/tutorial';
+import type { CreateTutorialInput, UpdateTutorialInput, TutorialDto } from '@shared/schemas/tutorial';
 import { api } from '@/lib/api-client';
 import { tutorialKeys } from './keys';
-import type { Tutorial } from './types';
 
-export const createTutorial = (input: CreateTutorialInput) => api<Tutorial>('/tutorials', { method: 'POST', body: input });
+export const createTutorial = (input: CreateTutorialInput) => api<TutorialDto>('/tutorials', { method: 'POST', body: input });
 export function useCreateTutorial() {
   const qc = useQueryClient();
   return useMutation({ mutationFn: createTutorial, onSuccess: () => qc.invalidateQueries({ queryKey: tutorialKeys.lists() }) });
 }
 
-export const updateTutorial = ({ id, ...input }: UpdateTutorialInput & { id: string }) => api<Tutorial>(`/tutorials/${id}`, { method: 'PATCH', body: input });
+export const updateTutorial = ({ id, ...input }: UpdateTutorialInput & { id: string }) =>
+  api<TutorialDto>(`/tutorials/${id}`, { method: 'PATCH', body: input });
 export function useUpdateTutorial() {
   const qc = useQueryClient();
   return useMutation({

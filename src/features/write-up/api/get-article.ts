@@ -1,10 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { api } from '@/lib/api-client';
 import { writeUpKeys } from './keys';
-import type { Article } from './types';
+import type { ArticleDto } from '@shared/schemas/article';
 
 /** The current write-up (version 0 with an empty paragraph before the first save). */
-export const getArticle = (tutorialId: string) => api<Article>(`/tutorials/${tutorialId}/article`);
+export const getArticle = (tutorialId: string) => api<ArticleDto>(`/tutorials/${tutorialId}/article`);
 
 /**
  * Always read fresh and never kept once the page is left: the editor holds the working copy, and

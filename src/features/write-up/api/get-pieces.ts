@@ -1,16 +1,8 @@
-import { queryOptions, useQuery } from '@tanstack/react-query';
-import { api } from '@/lib/api-client';
-import { writeUpKeys } from './keys';
-import type { LivePiece } from './types';
-
-/** The tutorial's cut list, for the live table in the write-up. */
-export const getLivePieces = (tutorialId: string) => api<{ pieces: LivePiece[]; precision: 8 | 16 | 32 }>(`/tutorials/${tutorialId}/pieces`);
+import { useQuery } from '@tanstack/react-query';
+import { piecesQueryOptions } from '@/lib/resources';
 
 /**
- * The Cut list section has its own cache, so its edits do not reach this one: the table reads
- * afresh whenever it is drawn (coming back from the Cut list section), on window focus, and
- * when older than a few seconds.
+ * The tutorial's cut list, for the live table in the write-up: the same cache entry as the Cut
+ * list section's (src/lib/resources.ts), so an edit there is what the table shows here.
  */
-export const livePiecesQueryOptions = (tutorialId: string) =>
-  queryOptions({ queryKey: writeUpKeys.pieces(tutorialId), queryFn: () => getLivePieces(tutorialId), staleTime: 5_000, refetchOnWindowFocus: true, refetchOnMount: 'always' });
-export const useLivePieces = (tutorialId: string) => useQuery(livePiecesQueryOptions(tutorialId));
+export const useLivePieces = (tutorialId: string) => useQuery(piecesQueryOptions(tutorialId));

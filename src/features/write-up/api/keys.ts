@@ -1,7 +1,7 @@
 /**
  * Query keys of the Write-up section. Everything about one tutorial's write-up sits under
- * `writeUpKeys.tutorial(id)`, so one prefix refreshes all of it; the live lists have their own
- * keys here, since a feature does not reach into another feature's cache.
+ * `writeUpKeys.tutorial(id)`, so one prefix refreshes all of it. The live lists and the still
+ * picker read the shared, resource-keyed entries of src/lib/resources.ts.
  */
 export const writeUpKeys = {
   all: ['write-up'] as const,
@@ -9,8 +9,4 @@ export const writeUpKeys = {
   article: (tutorialId: string) => [...writeUpKeys.tutorial(tutorialId), 'article'] as const,
   revisions: (tutorialId: string) => [...writeUpKeys.tutorial(tutorialId), 'revisions'] as const,
   revision: (revisionId: string) => [...writeUpKeys.all, 'revision', revisionId] as const,
-  pieces: (tutorialId: string) => [...writeUpKeys.tutorial(tutorialId), 'pieces'] as const,
-  supplies: (tutorialId: string) => [...writeUpKeys.tutorial(tutorialId), 'supplies'] as const,
-  recordings: (tutorialId: string) => [...writeUpKeys.tutorial(tutorialId), 'recordings'] as const,
-  stills: (recordingId: string) => [...writeUpKeys.all, 'recording', recordingId, 'stills'] as const,
 };

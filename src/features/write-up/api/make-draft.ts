@@ -1,15 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { JSONContent } from '@tiptap/core';
 import { api } from '@/lib/api-client';
 import { writeUpKeys } from './keys';
-import type { DraftPreview } from './types';
+import type { DraftPreviewDto, ReplacedArticleDto } from '@shared/schemas/article';
 
 /** A first draft from the newest recording's chapters and transcript, not saved (409 without footage). */
-export const previewDraft = (tutorialId: string) => api<DraftPreview>(`/tutorials/${tutorialId}/draft`, { method: 'POST' });
+export const previewDraft = (tutorialId: string) => api<DraftPreviewDto>(`/tutorials/${tutorialId}/draft`, { method: 'POST' });
 
 /** Makes the draft the write-up; the one it replaces stays in the revisions. */
 export const applyDraft = (tutorialId: string, version: number) =>
-  api<{ version: number; doc: JSONContent }>(`/tutorials/${tutorialId}/draft/apply`, { method: 'POST', body: { version } });
+  api<ReplacedArticleDto>(`/tutorials/${tutorialId}/draft/apply`, { method: 'POST', body: { version } });
 
 /** Asks for the draft preview. */
 export function usePreviewDraft(tutorialId: string) {

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { JSONContent } from '@tiptap/core';
+import type { ReplacedArticleDto } from '@shared/schemas/article';
 import { api } from '@/lib/api-client';
 import { writeUpKeys } from './keys';
 
@@ -8,7 +8,7 @@ export const markdownExportUrl = (tutorialId: string) => `/api/tutorials/${tutor
 
 /** Replaces the write-up with a Markdown file's content; the old one stays in the revisions. */
 export const importMarkdown = (tutorialId: string, markdown: string, version: number) =>
-  api<{ version: number; doc: JSONContent }>(`/tutorials/${tutorialId}/article/markdown`, { method: 'POST', body: { markdown, version } });
+  api<ReplacedArticleDto>(`/tutorials/${tutorialId}/article/markdown`, { method: 'POST', body: { markdown, version } });
 
 /** Imports Markdown; the revisions list gains the import. */
 export function useImportMarkdown(tutorialId: string) {

@@ -1,11 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { JSONContent } from '@tiptap/core';
+import type { ReplacedArticleDto } from '@shared/schemas/article';
 import { api } from '@/lib/api-client';
 import { writeUpKeys } from './keys';
 
 /** Makes an old revision the write-up again, as a new revision (nothing is thrown away). */
 export const restoreRevision = (revisionId: string, version: number) =>
-  api<{ version: number; doc: JSONContent }>(`/revisions/${revisionId}/restore`, { method: 'POST', body: { version } });
+  api<ReplacedArticleDto>(`/revisions/${revisionId}/restore`, { method: 'POST', body: { version } });
 
 /** Restores a revision; the list gains the restored copy. */
 export function useRestoreRevision(tutorialId: string) {

@@ -1,9 +1,9 @@
 import { Button } from '@/components/ui/button';
-import type { NewerArticle } from '../api/types';
+import type { NewerArticleDto } from '@shared/schemas/article';
 import { whenSaved } from '../utils/format';
 
 type Props = {
-  theirs: NewerArticle;
+  theirs: NewerArticleDto;
   /** The signed-in person, to say "you, elsewhere" when the newer save was their own. */
   meId: string | null;
   merging: boolean;
@@ -28,18 +28,20 @@ export function ConflictBanner({ theirs, meId, merging, busy, fromDevice, onKeep
       </h3>
       <p className="mt-1 text-sm">
         <strong>{who}</strong> saved version {theirs.version} {when}.{' '}
-        {fromDevice ? 'This device kept changes you made to an earlier version and that never reached the server.' : 'Your last changes were not saved over it.'} Nothing of
-        yours is lost: your version is on the right, and this device keeps it until you choose.
+        {fromDevice
+          ? 'This device kept changes you made to an earlier version and that never reached the server.'
+          : 'Your last changes were not saved over it.'}{' '}
+        Nothing of yours is lost: your version is on the right, and this device keeps it until you choose.
       </p>
       {merging ? (
         <>
           <p className="mt-2 text-sm">
-            Merge by hand: copy what you need from their version on the left into yours on the right (select, then copy and paste), then save yours as the newest
-            version.
+            Combine by hand: copy what you need from the saved version on the left into yours on the right (select, then copy and paste), then save yours as the
+            newest version.
           </p>
           <div className="mt-3 flex flex-wrap gap-2">
             <Button onClick={onSaveMerged} busy={busy}>
-              Save merged version
+              Save the combined version
             </Button>
             <Button variant="secondary" onClick={onBack} disabled={busy}>
               Back to the choices
@@ -49,15 +51,17 @@ export function ConflictBanner({ theirs, meId, merging, busy, fromDevice, onKeep
       ) : (
         <div className="mt-3 flex flex-wrap items-center gap-2">
           <Button onClick={onKeepMine} busy={busy}>
-            Keep mine
+            Keep my version
           </Button>
           <Button variant="secondary" onClick={onTakeTheirs} disabled={busy}>
-            Take theirs
+            Use the saved version
           </Button>
           <Button variant="secondary" onClick={onMerge} disabled={busy}>
-            Merge by hand
+            Combine by hand
           </Button>
-          <span className="text-xs text-pencil">Keep mine saves yours as the newest version; theirs stays in the revisions. Take theirs can be undone with Ctrl+Z.</span>
+          <span className="text-xs text-pencil">
+            Keep my version saves yours as the newest; the other stays in the revisions. Using the saved version can be undone with Ctrl+Z.
+          </span>
         </div>
       )}
     </section>

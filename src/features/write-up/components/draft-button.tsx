@@ -6,10 +6,10 @@ import { Notice } from '@/components/ui/notice';
 import { paths } from '@/config/paths';
 import { ApiError } from '@/lib/api-client';
 import { useApplyDraft, usePreviewDraft } from '../api/make-draft';
-import type { DraftPreview } from '../api/types';
+import type { DraftPreviewDto } from '@shared/schemas/article';
 import { UNSAVED_FIRST, type ReplaceActions } from './replace-actions';
 
-const stepCount = (p: DraftPreview) => (p.doc.content ?? []).filter((n) => n.type === 'step').length;
+const stepCount = (p: DraftPreviewDto) => (p.doc.content ?? []).filter((n) => n.type === 'step').length;
 
 /**
  * "Make a first draft": one step per chapter from the footage. When there is a write-up already,
@@ -18,7 +18,7 @@ const stepCount = (p: DraftPreview) => (p.doc.content ?? []).filter((n) => n.typ
 export function DraftButton({ tutorialId, actions, prominent }: { tutorialId: string; actions: ReplaceActions; prominent?: boolean }) {
   const preview = usePreviewDraft(tutorialId);
   const apply = useApplyDraft(tutorialId);
-  const [asking, setAsking] = useState<DraftPreview | null>(null);
+  const [asking, setAsking] = useState<DraftPreviewDto | null>(null);
   const [problem, setProblem] = useState<{ message: string; footage: boolean } | null>(null);
 
   const doApply = async () => {
@@ -47,7 +47,12 @@ export function DraftButton({ tutorialId, actions, prominent }: { tutorialId: st
 
   return (
     <>
-      <Button variant={prominent ? 'primary' : 'secondary'} size={prominent ? 'md' : 'sm'} busy={preview.isPending || (apply.isPending && !asking)} onClick={() => void start()}>
+      <Button
+        variant={prominent ? 'primary' : 'secondary'}
+        size={prominent ? 'md' : 'sm'}
+        busy={preview.isPending || (apply.isPending && !asking)}
+        onClick={() => void start()}
+      >
         Make a first draft
       </Button>
       {problem && (

@@ -1,10 +1,12 @@
 import { Extension, Node, type Extensions } from '@tiptap/core';
-import { Plugin, PluginKey } from '@tiptap/pm/state';
+import { Plugin, PluginKey, type EditorState } from '@tiptap/pm/state';
 import { Decoration, DecorationSet } from '@tiptap/pm/view';
 import { ReactNodeViewRenderer } from '@tiptap/react';
 // The module, not the index: the index also pulls in the Markdown parser, which the editor does not use.
 import { withNodeViews } from '@shared/editor/extensions';
+import { StepIds } from '@shared/editor/step-ids';
 import { enterFromStepTitle, insertStepHere, moveStepAtCursor } from '../utils/editor-commands';
+import { selectedLiveList, type LiveListName } from '../utils/live-lists';
 import { carriesImageFiles, dropUnpastableImages } from '../utils/paste';
 import { CalloutView } from './node-views/callout-view';
 import { CutListView } from './node-views/cut-list-view';
@@ -18,6 +20,8 @@ export type EditorHandlers = {
   openStillPicker?: () => void;
   /** A paste or drop of image files, which are not uploaded from the editor. */
   refusedFiles?: () => void;
+  /** Typing or pasting while a live list is selected: it is kept, and the page says how to remove it. */
+  keptLiveList?: (what: LiveListName) => void;
 };
 
 /** Our own keys: new step, move step, link and photo. */
@@ -53,12 +57,22 @@ const WriteUpKeys = Extension.create<{ handlers: () => EditorHandlers }>({
       handlers().refusedFiles?.();
       return true;
     };
+    // A selected live list would be replaced by the first key typed; it goes only by Delete or Backspace.
+    const keepLiveList = (state: EditorState) => {
+      const what = selectedLiveList(state);
+      if (what) handlers().keptLiveList?.(what);
+      return what !== null;
+    };
     return [
+      new Plugin({
+        key: new PluginKey('writeUpLiveLists'),
+        props: { handleTextInput: (view) => keepLiveList(view.state) },
+      }),
       new Plugin({
         key: new PluginKey('writeUpPaste'),
         props: {
           transformPasted: (slice) => dropUnpastableImages(slice),
-          handlePaste: (_view, event) => refuse(event.clipboardData),
+          handlePaste: (view, event) => keepLiveList(view.state) || refuse(event.clipboardData),
           handleDrop: (_view, event) => refuse((event as DragEvent).dataTransfer),
         },
       }),
@@ -79,9 +93,15 @@ const Placeholders = Extension.create({
             if (!editor.isEditable) return null;
             const { doc } = state;
             const decos: Decoration[] = [];
-            const hint = (from: number, size: number, text: string) => decos.push(Decoration.node(from, from + size, { class: 'wu-empty', 'data-placeholder': text }));
+            const hint = (from: number, size: number, text: string) =>
+              decos.push(Decoration.node(from, from + size, { class: 'wu-empty', 'data-placeholder': text }));
             const first = doc.firstChild;
-            if (doc.childCount <= 2 && first?.type.name === 'paragraph' && first.content.size === 0 && (doc.childCount === 1 || doc.lastChild!.content.size === 0)) {
+            if (
+              doc.childCount <= 2 &&
+              first?.type.name === 'paragraph' &&
+              first.content.size === 0 &&
+              (doc.childCount === 1 || doc.lastChild!.content.size === 0)
+            ) {
               hint(0, first.nodeSize, 'Start writing here, or make a first draft from the footage.');
             }
             doc.forEach((node, offset) => {
@@ -112,5 +132,6 @@ export function writeUpExtensions(opts: { handlers?: { current: EditorHandlers }
   }).map((ext) => (ext.name === 'step' && ext instanceof Node ? ext.extend({ draggable: true }) : ext));
   if (!opts.handlers) return base;
   const ref = opts.handlers;
-  return [...base, WriteUpKeys.configure({ handlers: () => ref.current }), Placeholders];
+  // Steps get their ids as they are made or pasted, so comments can point at them.
+  return [...base, WriteUpKeys.configure({ handlers: () => ref.current }), Placeholders, StepIds];
 }

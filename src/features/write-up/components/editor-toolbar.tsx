@@ -5,7 +5,16 @@ import { insertLiveList, insertStepHere } from '../utils/editor-commands';
 import { keyLabel } from '../utils/format';
 import { ariaKeys, isMac, SHORTCUTS } from './shortcuts';
 
-type ToolProps = { label: string; hint: string; keys?: string; active?: boolean; disabled?: boolean; onClick: () => void; children?: ReactNode; className?: string };
+type ToolProps = {
+  label: string;
+  hint: string;
+  keys?: string;
+  active?: boolean;
+  disabled?: boolean;
+  onClick: () => void;
+  children?: ReactNode;
+  className?: string;
+};
 
 function Tool({ label, hint, keys, active, disabled, onClick, children, className = '' }: ToolProps) {
   const mac = isMac();
@@ -57,7 +66,11 @@ export function EditorToolbar({ editor, onStill, onLink, status }: { editor: Edi
   });
   const chain = () => editor.chain().focus();
   return (
-    <div role="toolbar" aria-label="Write-up tools" className="sticky top-0 z-20 flex flex-wrap items-center gap-0.5 rounded-lg border border-line bg-white/95 px-2 py-1 shadow-sm backdrop-blur">
+    <div
+      role="toolbar"
+      aria-label="Write-up tools"
+      className="sticky top-0 z-20 flex flex-wrap items-center gap-0.5 rounded-lg border border-line bg-white/95 px-2 py-1 shadow-sm backdrop-blur"
+    >
       <Tool label="Step" hint="New step after this one" keys={SHORTCUTS.step} onClick={() => insertStepHere(editor)} className="font-medium">
         + Step
       </Tool>
@@ -73,27 +86,72 @@ export function EditorToolbar({ editor, onStill, onLink, status }: { editor: Edi
       <Tool label="Tip" hint="Make the selected text a tip, or undo it" active={s.tip} disabled={!s.canTip} onClick={() => chain().toggleTip().run()}>
         <span className="text-sage">✎</span> Tip
       </Tool>
-      <Tool label="Caution" hint="Make the selected text a caution, or undo it" active={s.caution} disabled={!s.canCaution} onClick={() => chain().toggleCaution().run()}>
+      <Tool
+        label="Caution"
+        hint="Make the selected text a caution, or undo it"
+        active={s.caution}
+        disabled={!s.canCaution}
+        onClick={() => chain().toggleCaution().run()}
+      >
         <span className="text-rosehip">⚠</span> Caution
       </Tool>
       <Divider />
-      <Tool label="Heading" hint="Section heading" keys={SHORTCUTS.heading} active={s.heading} disabled={!s.canHeading || s.inTitle} onClick={() => chain().toggleHeading({ level: 2 }).run()} className="font-serif">
+      <Tool
+        label="Heading"
+        hint="Section heading"
+        keys={SHORTCUTS.heading}
+        active={s.heading}
+        disabled={!s.canHeading || s.inTitle}
+        onClick={() => chain().toggleHeading({ level: 2 }).run()}
+        className="font-serif"
+      >
         Heading
       </Tool>
-      <Tool label="Bold" hint="Bold" keys={SHORTCUTS.bold} active={s.bold} disabled={!s.canBold} onClick={() => chain().toggleBold().run()} className="font-bold">
+      <Tool
+        label="Bold"
+        hint="Bold"
+        keys={SHORTCUTS.bold}
+        active={s.bold}
+        disabled={!s.canBold}
+        onClick={() => chain().toggleBold().run()}
+        className="font-bold"
+      >
         Bold
       </Tool>
-      <Tool label="Italic" hint="Italic" keys={SHORTCUTS.italic} active={s.italic} disabled={!s.canItalic} onClick={() => chain().toggleItalic().run()} className="italic">
+      <Tool
+        label="Italic"
+        hint="Italic"
+        keys={SHORTCUTS.italic}
+        active={s.italic}
+        disabled={!s.canItalic}
+        onClick={() => chain().toggleItalic().run()}
+        className="italic"
+      >
         Italic
       </Tool>
-      <Tool label="Link" hint="Link the selected text" keys={SHORTCUTS.link} active={s.link} disabled={s.inTitle} onClick={onLink} className="underline decoration-kraft underline-offset-2">
+      <Tool
+        label="Link"
+        hint="Link the selected text"
+        keys={SHORTCUTS.link}
+        active={s.link}
+        disabled={s.inTitle}
+        onClick={onLink}
+        className="underline decoration-kraft underline-offset-2"
+      >
         Link
       </Tool>
       <Tool label="List" hint="Bulleted list" keys={SHORTCUTS.list} active={s.list} disabled={!s.canList} onClick={() => chain().toggleBulletList().run()}>
         • List
       </Tool>
-      <Tool label="Numbered list" hint="Numbered list" keys={SHORTCUTS.numbered} active={s.numbered} disabled={!s.canNumbered} onClick={() => chain().toggleOrderedList().run()}>
-        1. List
+      <Tool
+        label="Numbered list"
+        hint="Numbered list"
+        keys={SHORTCUTS.numbered}
+        active={s.numbered}
+        disabled={!s.canNumbered}
+        onClick={() => chain().toggleOrderedList().run()}
+      >
+        Numbered list
       </Tool>
       {status && <div className="ml-auto pl-3">{status}</div>}
     </div>

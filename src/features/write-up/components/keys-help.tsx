@@ -26,7 +26,9 @@ export function KeysHelp() {
               {r.keys.map((k, i) => (
                 <Fragment key={k}>
                   {i > 0 && <span className="text-xs text-pencil">or</span>}
-                  <kbd className="rounded border border-line bg-paper px-1.5 py-0.5 font-sans text-xs shadow-[0_1px_0_#E6DFD3]">{keyLabel(k, mac)}</kbd>
+                  <kbd className="rounded border border-line bg-paper px-1.5 py-0.5 font-sans text-xs shadow-[0_1px_0_var(--palette-line)]">
+                    {keyLabel(k, mac)}
+                  </kbd>
                 </Fragment>
               ))}
             </dt>

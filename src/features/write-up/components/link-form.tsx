@@ -21,7 +21,11 @@ export function LinkForm({ editor, onClose }: { editor: Editor; onClose: () => v
     const { empty } = editor.state.selection;
     if (empty && !editor.isActive('link')) {
       // Nothing selected: the address itself becomes the linked text.
-      editor.chain().focus().insertContent({ type: 'text', text: href, marks: [{ type: 'link', attrs: { href } }] }).run();
+      editor
+        .chain()
+        .focus()
+        .insertContent({ type: 'text', text: href, marks: [{ type: 'link', attrs: { href } }] })
+        .run();
     } else {
       editor.chain().focus().extendMarkRange('link').setLink({ href }).run();
     }
@@ -59,7 +63,7 @@ export function LinkForm({ editor, onClose }: { editor: Editor; onClose: () => v
           }}
           aria-invalid={error ? true : undefined}
           aria-describedby={error ? `${id}-error` : undefined}
-          className={`rounded-md border bg-white px-2 py-1.5 text-sm outline-none focus:border-kraft ${error ? 'border-rosehip' : 'border-line'}`}
+          className={`rounded-md border bg-white px-2 py-1.5 text-sm focus:border-kraft ${error ? 'border-rosehip' : 'border-field'}`}
         />
       </div>
       <Button type="submit" size="sm">

@@ -89,8 +89,8 @@ export function MarkdownActions({ tutorialId, actions, canImport }: { tutorialId
         onConfirm={() => void doImport()}
         onCancel={() => setPending(null)}
       >
-        The write-up becomes the content of this Markdown file. The current one stays in the revisions. Steps are read from headings like “### Step 1: Title”, tips and
-        cautions from quotes that start with “**Tip:**” or “**Caution:**”.
+        The write-up becomes the content of this Markdown file. The current one stays in the revisions. Steps are read from headings like “### Step 1: Title”,
+        tips and cautions from quotes that start with “**Tip:**” or “**Caution:**”.
       </ConfirmDialog>
     </>
   );

@@ -8,7 +8,17 @@ import { useTutorialStills } from '../api/get-stills';
 import { Modal } from './modal';
 
 /** Picks one of the tutorial's stills (pulled in the Footage section) to put in the write-up. */
-export function StillPicker({ tutorialId, open, onPick, onClose }: { tutorialId: string; open: boolean; onPick: (still: StillAttrs) => void; onClose: () => void }) {
+export function StillPicker({
+  tutorialId,
+  open,
+  onPick,
+  onClose,
+}: {
+  tutorialId: string;
+  open: boolean;
+  onPick: (still: StillAttrs) => void;
+  onClose: () => void;
+}) {
   const q = useTutorialStills(tutorialId, { enabled: open });
   const total = q.groups.reduce((n, g) => n + g.stills.length, 0);
   return (

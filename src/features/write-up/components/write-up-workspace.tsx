@@ -1,12 +1,13 @@
 import type { JSONContent } from '@tiptap/core';
 import { EditorContent, useEditorState } from '@tiptap/react';
-import { useMemo, useRef, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Notice } from '@/components/ui/notice';
 import { useRestoreRevision } from '../api/restore-revision';
-import type { Article } from '../api/types';
+import type { ArticleDto } from '@shared/schemas/article';
 import { useWriteUpEditor } from '../hooks/use-write-up-editor';
 import { insertStillHere } from '../utils/editor-commands';
+import { keptLiveListText } from '../utils/live-lists';
 import { clockTime } from '../utils/format';
 import { withTrailingParagraph } from '../utils/same-doc';
 import { ConflictBanner } from './conflict-banner';
@@ -22,16 +23,57 @@ import { RevisionsDrawer } from './revisions-drawer';
 import { SaveStatusLabel } from './save-status';
 import { StillPicker } from './still-picker';
 import { WriteUpProvider } from './write-up-context';
+import { selectedPassage, stepRefs, type WriteUpReviewHooks } from '../utils/review-hooks';
 import './write-up.css';
 
-type Props = { tutorialId: string; article: Article; canEdit: boolean; meId: string | null };
+type Props = { tutorialId: string; article: ArticleDto; canEdit: boolean; meId: string | null; review?: WriteUpReviewHooks };
+
+/**
+ * Tells the page about the steps and the selected words as they change (only when they do), and
+ * lends it the autosave's flush, so comments beside the write-up can point at what is typed.
+ */
+function useReviewHooks(editor: ReturnType<typeof useWriteUpEditor>['editor'], review: WriteUpReviewHooks | undefined, flush: () => Promise<boolean>) {
+  const last = useRef({ steps: '', passage: '' });
+  const hooks = useRef(review);
+  hooks.current = review;
+  const flushRef = useRef(flush);
+  flushRef.current = flush;
+  useEffect(() => {
+    const lend = hooks.current?.flush;
+    if (lend) lend.current = () => flushRef.current();
+    const report = () => {
+      const h = hooks.current;
+      if (!h) return;
+      const steps = stepRefs(editor.state.doc);
+      const stepsKey = JSON.stringify(steps);
+      if (stepsKey !== last.current.steps) {
+        last.current.steps = stepsKey;
+        h.onSteps?.(steps);
+      }
+      const passage = selectedPassage(editor.state);
+      const passageKey = JSON.stringify(passage);
+      if (passageKey !== last.current.passage) {
+        last.current.passage = passageKey;
+        h.onSelection?.(passage);
+      }
+    };
+    report();
+    editor.on('update', report);
+    editor.on('selectionUpdate', report);
+    return () => {
+      editor.off('update', report);
+      editor.off('selectionUpdate', report);
+      if (lend) lend.current = null;
+    };
+  }, [editor]);
+}
 
 /**
  * The Write-up section at work: toolbar, the editor (Merriweather, a comfortable measure),
  * autosave with its status, the conflict view when someone saved a newer version, revisions,
  * the first draft and Markdown in and out.
  */
-export function WriteUpWorkspace({ tutorialId, article, canEdit, meId }: Props) {
+export function WriteUpWorkspace({ tutorialId, article, canEdit, meId, review }: Props) {
   const handlers = useRef<EditorHandlers>({});
   const { editor, autosave, status, start } = useWriteUpEditor({ tutorialId, article, canEdit, handlers });
   const [stillOpen, setStillOpen] = useState(false);
@@ -41,16 +83,22 @@ export function WriteUpWorkspace({ tutorialId, article, canEdit, meId }: Props) 
   const [resolving, setResolving] = useState(false);
   const [notice, setNotice] = useState<{ kind: 'info' | 'success' | 'error'; text: string } | null>(() =>
     start.kind === 'restore'
-      ? { kind: 'info', text: `Put back changes this device kept from ${clockTime(new Date(start.draft.editedAt))} that had not reached the server; saving them now.` }
+      ? {
+          kind: 'info',
+          text: `Put back changes this device kept from ${clockTime(new Date(start.draft.editedAt))} that had not reached the server; saving them now.`,
+        }
       : null,
   );
   const restore = useRestoreRevision(tutorialId);
   handlers.current = {
     openLink: () => setLinkOpen(true),
     openStillPicker: () => setStillOpen(true),
-    refusedFiles: () => setNotice({ kind: 'error', text: 'Photos cannot be pasted or dropped in from files. Pull a still in the Footage section, then use “+ Still”.' }),
+    keptLiveList: (what) => setNotice({ kind: 'info', text: keptLiveListText(what) }),
+    refusedFiles: () =>
+      setNotice({ kind: 'error', text: 'Photos cannot be pasted or dropped in from files. Pull a still in the Footage section, then use “+ Still”.' }),
   };
   const empty = useEditorState({ editor, selector: ({ editor: e }) => e.isEmpty });
+  useReviewHooks(editor, review, () => autosave.flush());
 
   const actions: ReplaceActions = useMemo(
     () => ({
@@ -97,14 +145,16 @@ export function WriteUpWorkspace({ tutorialId, article, canEdit, meId }: Props) 
   const statusLabel = <SaveStatusLabel status={status} deviceCopyFailed={autosave.deviceCopyFailed} />;
 
   return (
-    <WriteUpProvider tutorialId={tutorialId}>
+    <WriteUpProvider tutorialId={tutorialId} onCommentOn={review?.onCommentOn}>
       <div className="space-y-3">
         <div className="flex flex-wrap items-center gap-2">
           <h2 className="mr-auto text-xl">Write-up</h2>
           {canEdit && !empty && <DraftButton tutorialId={tutorialId} actions={actions} />}
-          <Button variant="secondary" size="sm" onClick={() => setRevisionsOpen(true)} aria-expanded={revisionsOpen}>
-            Revisions
-          </Button>
+          {article.abilities.readRevisions && (
+            <Button variant="secondary" size="sm" onClick={() => setRevisionsOpen(true)} aria-expanded={revisionsOpen}>
+              Revisions
+            </Button>
+          )}
           <MarkdownActions tutorialId={tutorialId} actions={actions} canImport={canEdit} />
         </div>
 
@@ -140,7 +190,10 @@ export function WriteUpWorkspace({ tutorialId, article, canEdit, meId }: Props) 
           <div className="flex flex-wrap items-center gap-3 rounded-lg border border-dashed border-kraft/50 bg-white/60 px-5 py-4">
             <div className="mr-auto">
               <h3 className="text-lg">This write-up is empty</h3>
-              <p className="text-sm text-pencil">Make a first draft from the footage: one step for each chapter, with the spoken words tidied up and the stills placed. Or just start typing below.</p>
+              <p className="text-sm text-pencil">
+                Make a first draft from the footage: one step for each chapter, with the spoken words tidied up and the stills placed. Or just start typing
+                below.
+              </p>
             </div>
             <DraftButton tutorialId={tutorialId} actions={actions} prominent />
           </div>
@@ -160,7 +213,7 @@ export function WriteUpWorkspace({ tutorialId, article, canEdit, meId }: Props) 
               </div>
             </section>
           )}
-          <section key="mine" aria-label={conflict ? 'Your version' : undefined} className="min-w-0">
+          <section key="mine" aria-label={conflict ? 'Your version' : undefined} className="min-w-0" data-comment-scope>
             {conflict && (
               <h3 className="mb-2 font-sans text-sm font-semibold">
                 Your version <span className="font-normal text-pencil">{merging ? '(edit it, then save)' : '(kept on this device)'}</span>
@@ -193,7 +246,13 @@ export function WriteUpWorkspace({ tutorialId, article, canEdit, meId }: Props) 
           }}
         />
       )}
-      <RevisionsDrawer tutorialId={tutorialId} open={revisionsOpen} canRestore={canEdit} onClose={() => setRevisionsOpen(false)} onRestore={restoreRevision} />
+      <RevisionsDrawer
+        tutorialId={tutorialId}
+        open={revisionsOpen && article.abilities.readRevisions}
+        canRestore={canEdit}
+        onClose={() => setRevisionsOpen(false)}
+        onRestore={restoreRevision}
+      />
     </WriteUpProvider>
   );
 }

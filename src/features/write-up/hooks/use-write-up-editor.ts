@@ -2,7 +2,7 @@ import type { Editor } from '@tiptap/core';
 import { useEditor } from '@tiptap/react';
 import { useEffect, useRef, useState, useSyncExternalStore } from 'react';
 import { saveArticle } from '../api/save-article';
-import type { Article } from '../api/types';
+import type { ArticleDto } from '@shared/schemas/article';
 import { writeUpExtensions, type EditorHandlers } from '../components/editor-extensions';
 import { Autosave } from '../utils/autosave';
 import { clearLocalDraft, planStart, readLocalDraft, type StartPlan, type StorageLike } from '../utils/local-draft';
@@ -24,7 +24,17 @@ function deviceStorage(): StorageLike | null {
  * version, or from edits this device kept (see planStart): put back and saved when they were
  * made on the current version, or handed to the conflict view when someone saved since.
  */
-export function useWriteUpEditor({ tutorialId, article, canEdit, handlers }: { tutorialId: string; article: Article; canEdit: boolean; handlers: { current: EditorHandlers } }) {
+export function useWriteUpEditor({
+  tutorialId,
+  article,
+  canEdit,
+  handlers,
+}: {
+  tutorialId: string;
+  article: ArticleDto;
+  canEdit: boolean;
+  handlers: { current: EditorHandlers };
+}) {
   const [storage] = useState(deviceStorage);
   const [start] = useState<StartPlan>(() => {
     const kept = canEdit ? readLocalDraft(storage, tutorialId) : null;

@@ -43,7 +43,13 @@ function setup(over: Partial<AutosaveOptions> = {}) {
 // A 409 as the server sends it (server/services/write-up.ts; RFC 9110 §15.5.10: the request
 // conflicts with the current state of the resource).
 const stale = (version: number, doc: JSONContent) =>
-  new ApiError(409, `Someone saved a newer version (${version})`, [], { code: 'stale', version, doc, updatedBy: { id: 'u2', name: 'Ada Quill' }, updatedAt: '2026-03-02T12:04:00.000Z' });
+  new ApiError(409, `Someone saved a newer version (${version})`, [], {
+    code: 'stale',
+    version,
+    doc,
+    updatedBy: { id: 'u2', name: 'Ada Quill' },
+    updatedAt: '2026-03-02T12:04:00.000Z',
+  });
 
 beforeEach(() => vi.useFakeTimers());
 afterEach(() => vi.useRealTimers());

@@ -1,7 +1,7 @@
 import type { JSONContent } from '@tiptap/core';
 import { ApiError } from '@/lib/api-client';
 import { newerArticleOf } from '../api/save-article';
-import type { NewerArticle, SavedArticle } from '../api/types';
+import type { NewerArticleDto, SavedArticleDto } from '@shared/schemas/article';
 import { clearLocalDraft, writeLocalDraft, type StorageLike } from './local-draft';
 import { isRetryable, saveErrorMessage } from './save-errors';
 import { sameDoc } from './same-doc';
@@ -14,7 +14,7 @@ export type SaveStatus =
   | { kind: 'saved'; at: Date }
   | { kind: 'offline' }
   | { kind: 'error'; message: string }
-  | { kind: 'conflict'; theirs: NewerArticle };
+  | { kind: 'conflict'; theirs: NewerArticleDto };
 
 export interface AutosaveOptions {
   tutorialId: string;
@@ -22,11 +22,11 @@ export interface AutosaveOptions {
   version: number;
   /** The editor's current document. */
   getDoc: () => JSONContent;
-  put: (doc: JSONContent, version: number) => Promise<SavedArticle>;
+  put: (doc: JSONContent, version: number) => Promise<SavedArticleDto>;
   storage?: StorageLike | null;
   isOnline?: () => boolean;
   /** Called after each save the server accepted (the page updates its cache). */
-  onSaved?: (doc: JSONContent, saved: SavedArticle) => void;
+  onSaved?: (doc: JSONContent, saved: SavedArticleDto) => void;
   /** The pause after the last edit before saving. */
   delayMs?: number;
   /** The pause before the edits are written to this device (a burst of typing is written once). */

@@ -1,6 +1,6 @@
 import type { Editor, JSONContent } from '@tiptap/core';
 import type { StillAttrs } from '@shared/editor';
-import { blockInsertPos, topLevelInsertRange } from './insert-position';
+import { stillInsertRange, topLevelInsertRange } from './insert-position';
 import { moveStep, stepAroundSelection } from './step-moves';
 
 const EMPTY_STEP: JSONContent = { type: 'step', attrs: { atMs: null, chapterId: null }, content: [{ type: 'stepTitle' }, { type: 'paragraph' }] };
@@ -8,7 +8,13 @@ const EMPTY_STEP: JSONContent = { type: 'step', attrs: { atMs: null, chapterId: 
 /** Adds an empty step after the block (or step) the cursor is in and puts the cursor in its title. */
 export function insertStepHere(editor: Editor): boolean {
   const range = topLevelInsertRange(editor.state);
-  return editor.chain().focus().insertContentAt(range, EMPTY_STEP).setTextSelection(range.from + 2).scrollIntoView().run();
+  return editor
+    .chain()
+    .focus()
+    .insertContentAt(range, EMPTY_STEP)
+    .setTextSelection(range.from + 2)
+    .scrollIntoView()
+    .run();
 }
 
 /** Adds a live list (the cut list or the supplies) at the top level, after the cursor's block. */
@@ -18,16 +24,10 @@ export function insertLiveList(editor: Editor, type: 'cutList' | 'supplyList'): 
   return editor.chain().focus().insertContentAt(range, { type, attrs }).scrollIntoView().run();
 }
 
-/** Adds a photo at the cursor's paragraph, or at the nearest place after it where a photo may go (see blockInsertPos). */
+/** Adds a photo after the cursor's paragraph (in place of it when it is an empty line); see stillInsertRange. */
 export function insertStillHere(editor: Editor, attrs: StillAttrs): boolean {
-  const { state } = editor;
-  const still = state.schema.nodes.still!;
-  const { $from } = state.selection;
-  // In a paragraph that may be followed by a photo: split it there (or fill it, when empty).
-  const grand = $from.depth > 0 ? $from.node($from.depth - 1) : null;
-  const inParagraph = $from.parent.type.name === 'paragraph' && grand !== null && grand.canReplaceWith($from.index($from.depth - 1), $from.index($from.depth - 1) + 1, still);
-  if (inParagraph && editor.chain().focus().insertStill(attrs).scrollIntoView().run()) return true;
-  return editor.chain().focus().insertContentAt(blockInsertPos(state, still), { type: 'still', attrs }).scrollIntoView().run();
+  const range = stillInsertRange(editor.state, editor.state.schema.nodes.still!);
+  return editor.chain().focus().insertContentAt(range, { type: 'still', attrs }).scrollIntoView().run();
 }
 
 /** Moves the step holding the cursor up or down past its neighbouring step (Alt+↑ / Alt+↓). */
@@ -50,6 +50,16 @@ export function enterFromStepTitle(editor: Editor): boolean {
   const step = $from.node($from.depth - 1);
   const afterTitle = $from.after();
   const next = step.childCount > 1 ? step.child(1) : null;
-  if (next?.type.name === 'paragraph' && next.content.size === 0) return editor.chain().setTextSelection(afterTitle + 1).scrollIntoView().run();
-  return editor.chain().insertContentAt(afterTitle, { type: 'paragraph' }).setTextSelection(afterTitle + 1).scrollIntoView().run();
+  if (next?.type.name === 'paragraph' && next.content.size === 0)
+    return editor
+      .chain()
+      .setTextSelection(afterTitle + 1)
+      .scrollIntoView()
+      .run();
+  return editor
+    .chain()
+    .insertContentAt(afterTitle, { type: 'paragraph' })
+    .setTextSelection(afterTitle + 1)
+    .scrollIntoView()
+    .run();
 }

@@ -1,7 +1,7 @@
 import { getEditorSchema } from '@shared/editor';
 import { EditorState, NodeSelection, TextSelection } from '@tiptap/pm/state';
 import { describe, expect, it } from 'vitest';
-import { blockInsertPos, topLevelInsertRange } from './insert-position';
+import { blockInsertPos, stillInsertRange, topLevelInsertRange } from './insert-position';
 import { giftBoxDoc, step } from './test-docs';
 
 const schema = getEditorSchema();
@@ -63,5 +63,42 @@ describe('blockInsertPos', () => {
     const pos = blockInsertPos(s, still);
     expect(pos).toBe(doc.firstChild!.nodeSize - 1);
     expect(() => s.tr.insert(pos, still.create({ src: '/media/stills/a.jpg' })).doc.check()).not.toThrow();
+  });
+});
+
+describe('stillInsertRange', () => {
+  const still = schema.nodes.still!;
+  const photo = still.create({ src: '/media/stills/a.jpg' });
+  const textsOf = (d: ReturnType<typeof schema.nodeFromJSON>) => {
+    const out: string[] = [];
+    d.descendants((n) => {
+      if (n.type.name === 'paragraph') out.push(n.textContent);
+    });
+    return out;
+  };
+
+  it('puts a photo after the paragraph, never inside a word, wherever the cursor is in it', () => {
+    const doc = schema.nodeFromJSON(giftBoxDoc());
+    let para = -1;
+    doc.descendants((n, pos) => {
+      if (para < 0 && n.type.name === 'paragraph' && n.textContent === 'Cut two 3 in circles.') para = pos;
+    });
+    const node = doc.nodeAt(para)!;
+    for (const offset of [1, 5, 9, node.content.size]) {
+      // "Cu|t", "Cut t|wo", "Cut two |3": the paragraph stays whole and the photo follows it.
+      const s = EditorState.create({ doc, selection: TextSelection.create(doc, para + offset) });
+      const r = stillInsertRange(s, still);
+      expect(r).toEqual({ from: para + node.nodeSize, to: para + node.nodeSize });
+      const after = s.tr.replaceWith(r.from, r.to, photo).doc;
+      expect(() => after.check()).not.toThrow();
+      expect(textsOf(after)).toEqual(textsOf(doc));
+      expect(after.nodeAt(r.from)!.type.name).toBe('still');
+    }
+  });
+
+  it('takes the place of the empty line the cursor is on', () => {
+    const doc = schema.nodeFromJSON({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Intro' }] }, { type: 'paragraph' }] });
+    const s = EditorState.create({ doc, selection: TextSelection.create(doc, 8) });
+    expect(stillInsertRange(s, still)).toEqual({ from: 7, to: 9 });
   });
 });

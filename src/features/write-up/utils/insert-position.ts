@@ -34,3 +34,19 @@ export function blockInsertPos(state: EditorState, type: NodeType): number {
   }
   return state.doc.content.size;
 }
+
+/**
+ * Where "+ Still" puts a photo: in place of the empty line the cursor is on, else after the
+ * paragraph (or the innermost block) the cursor is in, so a photo never splits a word or a sentence.
+ */
+export function stillInsertRange(state: EditorState, type: NodeType): { from: number; to: number } {
+  const { $from, empty } = state.selection;
+  const d = $from.depth;
+  if (empty && d > 0 && $from.parent.type.name === 'paragraph' && $from.parent.content.size === 0) {
+    const container = $from.node(d - 1);
+    const index = $from.index(d - 1);
+    if (container.canReplaceWith(index, index + 1, type)) return { from: $from.before(d), to: $from.after(d) };
+  }
+  const pos = blockInsertPos(state, type);
+  return { from: pos, to: pos };
+}

@@ -33,7 +33,13 @@ describe('the copy kept on this device', () => {
   });
 
   it('reports a full storage instead of throwing (setItem throws QuotaExceededError: HTML Living Standard, Web Storage)', () => {
-    const full: StorageLike = { getItem: () => null, removeItem: () => undefined, setItem: () => { throw new DOMException('full', 'QuotaExceededError'); } };
+    const full: StorageLike = {
+      getItem: () => null,
+      removeItem: () => undefined,
+      setItem: () => {
+        throw new DOMException('full', 'QuotaExceededError');
+      },
+    };
     expect(writeLocalDraft(full, 't', { baseVersion: 0, doc: giftBoxDoc(), editedAt: 0 })).toBe(false);
   });
 });

@@ -57,7 +57,15 @@ describe('pasted HTML', () => {
       content: [
         {
           type: 'bulletList',
-          content: [{ type: 'listItem', content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Glue' }] }, { type: 'still', attrs: { src: 'blob:x' } }] }],
+          content: [
+            {
+              type: 'listItem',
+              content: [
+                { type: 'paragraph', content: [{ type: 'text', text: 'Glue' }] },
+                { type: 'still', attrs: { src: 'blob:x' } },
+              ],
+            },
+          ],
         },
       ],
     });

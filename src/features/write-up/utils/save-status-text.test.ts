@@ -11,7 +11,11 @@ describe('saveStatusText', () => {
   it('says what is happening in words, never by colour alone', () => {
     expect(saveStatusText({ kind: 'pending' }, now)).toBe('Saving…');
     expect(saveStatusText({ kind: 'offline' }, now)).toBe('Offline — changes kept on this device');
-    expect(saveStatusText({ kind: 'error', message: 'doc: /content/0: unknown node type "blink"' }, now)).toBe('Not saved: doc: /content/0: unknown node type "blink"');
-    expect(saveStatusText({ kind: 'conflict', theirs: { doc: { type: 'doc' }, version: 2, updatedBy: null, updatedAt: null } }, now)).toBe('Not saved: someone saved a newer version');
+    expect(saveStatusText({ kind: 'error', message: 'doc: /content/0: unknown node type "blink"' }, now)).toBe(
+      'Not saved: doc: /content/0: unknown node type "blink"',
+    );
+    expect(saveStatusText({ kind: 'conflict', theirs: { doc: { type: 'doc' }, version: 2, updatedBy: null, updatedAt: null } }, now)).toBe(
+      'Not saved: someone saved a newer version',
+    );
   });
 });

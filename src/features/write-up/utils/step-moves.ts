@@ -55,7 +55,9 @@ export function moveStep(state: EditorState, pos: number, dir: -1 | 1): { tr: Tr
   if (from > me.pos && to < me.pos + me.node.nodeSize) {
     const shift = newPos - me.pos;
     const sel = state.selection;
-    tr.setSelection(sel instanceof NodeSelection ? NodeSelection.create(tr.doc, sel.from + shift) : TextSelection.create(tr.doc, sel.anchor + shift, sel.head + shift));
+    tr.setSelection(
+      sel instanceof NodeSelection ? NodeSelection.create(tr.doc, sel.from + shift) : TextSelection.create(tr.doc, sel.anchor + shift, sel.head + shift),
+    );
   }
   return { tr: tr.scrollIntoView(), pos: newPos };
 }

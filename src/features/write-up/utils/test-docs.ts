@@ -5,7 +5,14 @@ const text = (t: string): JSONContent[] => (t ? [{ type: 'text', text: t }] : []
 
 /** A step with a title and one paragraph. */
 export function step(title: string, body: string, atMs: number | null = null): JSONContent {
-  return { type: 'step', attrs: { atMs, chapterId: null }, content: [{ type: 'stepTitle', content: text(title) }, { type: 'paragraph', content: text(body) }] };
+  return {
+    type: 'step',
+    attrs: { atMs, chapterId: null },
+    content: [
+      { type: 'stepTitle', content: text(title) },
+      { type: 'paragraph', content: text(body) },
+    ],
+  };
 }
 
 /** Title, intro, three steps with a tip paragraph between the first two. */

@@ -3,14 +3,14 @@ import { CUT_LIST_UNITS, type CutListUnits, type RenderPiece } from '@shared/edi
 import { inchSize, mmSize } from '@shared/editor/render-parts';
 import { paths } from '@/config/paths';
 import { useLivePieces } from '../../api/get-pieces';
-import type { LivePiece } from '../../api/types';
+import type { PieceDto } from '@shared/schemas/piece';
 import { useWriteUpContext } from '../write-up-context';
 import { LiveFrame } from './live-frame';
 
 const UNIT_LABELS: Record<CutListUnits, string> = { both: 'inches and mm', in: 'inches only', mm: 'mm only' };
 
 // The same size words the published page uses (shared/editor/render-parts).
-function renderPiece(p: LivePiece): RenderPiece {
+function renderPiece(p: PieceDto): RenderPiece {
   return {
     name: p.name,
     material: p.material,
@@ -36,7 +36,11 @@ export function CutListView({ node, editor, updateAttributes, selected }: NodeVi
   const controls = editor.isEditable ? (
     <label className="flex items-center gap-1 font-sans text-xs text-pencil">
       Sizes
-      <select value={units} onChange={(e) => updateAttributes({ units: e.target.value })} className="rounded border border-line bg-white px-1 py-0.5 text-xs text-ink">
+      <select
+        value={units}
+        onChange={(e) => updateAttributes({ units: e.target.value })}
+        className="min-h-6 rounded border border-field bg-white px-1 py-0.5 text-xs text-ink"
+      >
         {CUT_LIST_UNITS.map((u) => (
           <option key={u} value={u}>
             {UNIT_LABELS[u]}
@@ -48,7 +52,14 @@ export function CutListView({ node, editor, updateAttributes, selected }: NodeVi
 
   return (
     <NodeViewWrapper className="wu-live-wrap">
-      <LiveFrame title="Cut list" editTo={paths.tutorialSection(tutorialId, 'cut-list')} editLabel="Cut list" controls={controls} selected={selected} editable={editor.isEditable}>
+      <LiveFrame
+        title="Cut list"
+        editTo={paths.tutorialSection(tutorialId, 'cut-list')}
+        editLabel="Cut list"
+        controls={controls}
+        selected={selected}
+        editable={editor.isEditable}
+      >
         {q.isPending ? (
           <p className="wu-live-empty">Loading the pieces …</p>
         ) : q.error ? (
@@ -56,7 +67,7 @@ export function CutListView({ node, editor, updateAttributes, selected }: NodeVi
         ) : pieces.length === 0 ? (
           <p className="wu-live-empty">No pieces yet. Add them in the Cut list section and they appear here.</p>
         ) : (
-          <table className="wu-table">
+          <table className="wu-table stack-table">
             <thead>
               <tr>
                 <th scope="col">Piece</th>
@@ -73,17 +84,19 @@ export function CutListView({ node, editor, updateAttributes, selected }: NodeVi
               {pieces.map((p) => {
                 const rp = renderPiece(p);
                 return (
-                  <tr key={p.id}>
+                  <tr key={p.id} data-piece-id={p.id}>
                     <th scope="row">{p.name}</th>
-                    <td>{p.material}</td>
-                    <td className="text-right tabular-nums">{p.quantity}</td>
-                    <td>
+                    <td data-label="Material">{p.material}</td>
+                    <td className="text-right tabular-nums" data-label="Qty">
+                      {p.quantity}
+                    </td>
+                    <td data-label="Size">
                       {units !== 'mm' && <span>{inchSize(rp)}</span>}
                       {units === 'both' && <span className="wu-mm"> {mmSize(rp)}</span>}
                       {units === 'mm' && <span>{mmSize(rp)}</span>}
                     </td>
                     {withScores && (
-                      <td>
+                      <td data-label="Score lines">
                         {p.scoreLines.map((s, i) => (
                           <span key={i}>
                             {i > 0 && ', '}
@@ -93,7 +106,11 @@ export function CutListView({ node, editor, updateAttributes, selected }: NodeVi
                         ))}
                       </td>
                     )}
-                    {withNotes && <td className="text-pencil">{p.notes}</td>}
+                    {withNotes && (
+                      <td className="text-pencil" data-label="Notes">
+                        {p.notes}
+                      </td>
+                    )}
                   </tr>
                 );
               })}

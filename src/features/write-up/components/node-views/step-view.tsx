@@ -10,7 +10,8 @@ import { useWriteUpContext } from '../write-up-context';
  * (editable content), a chip with its time in the video, and buttons to move it.
  */
 export function StepView({ node, editor, getPos }: NodeViewProps) {
-  const { tutorialId } = useWriteUpContext();
+  const { tutorialId, onCommentOn } = useWriteUpContext();
+  const stepId = typeof node.attrs.id === 'string' ? (node.attrs.id as string) : null;
   // Re-read on every change: a step inserted or moved elsewhere renumbers this one.
   const place = useEditorState({
     editor,
@@ -41,7 +42,7 @@ export function StepView({ node, editor, getPos }: NodeViewProps) {
   };
 
   return (
-    <NodeViewWrapper as="section" className="wu-step" aria-label={number ? `Step ${number}: ${title}` : title}>
+    <NodeViewWrapper as="section" className="wu-step" data-step-id={stepId ?? undefined} aria-label={number ? `Step ${number}: ${title}` : title}>
       <div className="wu-step-rail" contentEditable={false}>
         <span className="wu-step-number" aria-hidden>
           {number ?? '·'}
@@ -60,9 +61,21 @@ export function StepView({ node, editor, getPos }: NodeViewProps) {
               {timeChipLabel(atMs)}
             </Link>
           )}
+          {onCommentOn && stepId && (
+            <button type="button" className="wu-step-comment" onClick={() => onCommentOn(stepId)} aria-label={`Comment on step ${number ?? ''}`}>
+              Comment
+            </button>
+          )}
           {editable && (
             <span className="wu-step-moves">
-              <button type="button" data-move="-1" disabled={place.number <= 1} onClick={() => move(-1)} aria-label={`Move step ${number} up`} title="Move up (Alt+↑)">
+              <button
+                type="button"
+                data-move="-1"
+                disabled={place.number <= 1}
+                onClick={() => move(-1)}
+                aria-label={`Move step ${number} up`}
+                title="Move up (Alt+↑)"
+              >
                 ↑
               </button>
               <button

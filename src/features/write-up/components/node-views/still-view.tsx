@@ -6,7 +6,19 @@ import type { StillAttrs } from '@shared/editor';
  * Caption and alt text fields that keep their own text while focused, so the node's update (one
  * transaction a keystroke) never moves the cursor in the field.
  */
-function AttrField({ label, value, onChange, multiline, describedBy }: { label: string; value: string; onChange: (v: string) => void; multiline?: boolean; describedBy?: string }) {
+function AttrField({
+  label,
+  value,
+  onChange,
+  multiline,
+  describedBy,
+}: {
+  label: string;
+  value: string;
+  onChange: (v: string) => void;
+  multiline?: boolean;
+  describedBy?: string;
+}) {
   const id = useId();
   const [text, setText] = useState(value);
   const focused = useRef(false);
@@ -23,7 +35,7 @@ function AttrField({ label, value, onChange, multiline, describedBy }: { label: 
       setText(e.target.value);
       onChange(e.target.value);
     },
-    className: 'w-full rounded border border-line bg-white px-2 py-1 font-sans text-sm text-ink outline-none focus:border-kraft',
+    className: 'w-full rounded border border-field bg-white px-2 py-1 font-sans text-sm text-ink focus:border-kraft',
   };
   return (
     <div className="flex flex-col gap-0.5">
@@ -43,7 +55,7 @@ export function StillView({ node, editor, updateAttributes, deleteNode, selected
   const noAlt = !a.alt?.trim();
   const [failed, setFailed] = useState<string | null>(null);
   return (
-    <NodeViewWrapper as="figure" className={`wu-still${selected ? ' is-selected' : ''}`}>
+    <NodeViewWrapper as="figure" className={`wu-still${selected ? ' is-selected' : ''}`} data-still-id={a.stillId ?? undefined}>
       <img
         src={a.src}
         alt={a.alt ?? ''}
@@ -73,7 +85,7 @@ export function StillView({ node, editor, updateAttributes, deleteNode, selected
             ) : (
               <span />
             )}
-            <button type="button" onClick={deleteNode} className="shrink-0 font-sans text-xs text-pencil underline hover:text-rosehip">
+            <button type="button" onClick={deleteNode} className="min-h-6 shrink-0 px-1 font-sans text-xs text-pencil underline hover:text-rosehip">
               Remove photo
             </button>
           </div>

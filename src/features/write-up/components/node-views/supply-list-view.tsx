@@ -1,13 +1,13 @@
 import { NodeViewWrapper, type NodeViewProps } from '@tiptap/react';
-import { groupSupplies, supplyDetails } from '@shared/editor/render-parts';
+import { groupSupplies, sponsoredTag, supplyDetails } from '@shared/editor/render-parts';
 import { paths } from '@/config/paths';
 import { useLiveSupplies } from '../../api/get-supplies';
-import type { LiveSupply } from '../../api/types';
+import type { SupplyDto } from '@shared/schemas/supply';
 import { useWriteUpContext } from '../write-up-context';
 import { LiveFrame } from './live-frame';
 
 // The shared renderers' shape: absent rather than null.
-const forRender = (s: LiveSupply) => ({ ...s, url: s.url ?? undefined, discountCode: s.discountCode ?? undefined });
+const forRender = (s: SupplyDto) => ({ ...s, url: s.url ?? undefined, discountCode: s.discountCode ?? undefined });
 type RenderedSupply = ReturnType<typeof forRender>;
 
 function SupplyItem({ s }: { s: RenderedSupply }) {
@@ -21,7 +21,7 @@ function SupplyItem({ s }: { s: RenderedSupply }) {
       ) : (
         s.name
       )}
-      {s.sponsored && s.url && <span className="wu-mm"> (sponsored link)</span>}
+      {sponsoredTag(s) && <span className="wu-mm">{sponsoredTag(s)}</span>}
       <span className="wu-mm">
         {d.quantity}
         {d.note}
@@ -43,14 +43,21 @@ export function SupplyListView({ node, editor, updateAttributes, selected }: Nod
   const grouped = node.attrs.grouped !== false;
   const supplies = q.data?.supplies ?? [];
   const controls = editor.isEditable ? (
-    <label className="flex items-center gap-1 font-sans text-xs text-pencil">
-      <input type="checkbox" checked={grouped} onChange={(e) => updateAttributes({ grouped: e.target.checked })} />
+    <label className="flex min-h-6 items-center gap-1.5 font-sans text-xs text-pencil">
+      <input type="checkbox" className="h-6 w-6 accent-kraft" checked={grouped} onChange={(e) => updateAttributes({ grouped: e.target.checked })} />
       By category
     </label>
   ) : null;
   return (
     <NodeViewWrapper className="wu-live-wrap">
-      <LiveFrame title="Supplies" editTo={paths.tutorialSection(tutorialId, 'supplies')} editLabel="Supplies" controls={controls} selected={selected} editable={editor.isEditable}>
+      <LiveFrame
+        title="Supplies"
+        editTo={paths.tutorialSection(tutorialId, 'supplies')}
+        editLabel="Supplies"
+        controls={controls}
+        selected={selected}
+        editable={editor.isEditable}
+      >
         {q.isPending ? (
           <p className="wu-live-empty">Loading the supplies …</p>
         ) : q.error ? (

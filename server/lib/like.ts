@@ -1,0 +1,2 @@
+/** An ILIKE pattern matching `text` anywhere, with LIKE's own characters (% _ \) taken literally. */
+export const containsPattern = (text: string) => `%${text.replace(/[%_\\]/g, '\\$&')}%`;
