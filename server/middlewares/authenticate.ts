@@ -1,5 +1,6 @@
 import type { RequestHandler } from 'express';
-import { Membership, User } from '../models';
+import type { User } from '../models';
+import { findSignedInUser } from '../services/accounts';
 
 declare module 'express-session' {
   interface SessionData {
@@ -43,7 +44,7 @@ export const loadUser: RequestHandler = async (req, _res, next) => {
   try {
     const id = req.session?.userId;
     if (id && !req.user) {
-      const user = await User.findByPk(id, { include: [{ model: Membership, as: 'memberships', attributes: ['id', 'studioId', 'role'] }] });
+      const user = await findSignedInUser(id);
       if (user) req.user = user;
       else delete req.session.userId;
     }

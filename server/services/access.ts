@@ -1,10 +1,11 @@
 import type { Role } from '@shared/schemas/roles';
 import type { ExportVersion } from '@shared/schemas/publish';
 import type { BundleSource } from './publish/bundle';
-import { Chapter, CraftClass, Membership, Recording, Still, Studio, Tutorial, User } from '../models';
+import { Chapter, CraftClass, Membership, Recording, Still, Studio, Tutorial, type User } from '../models';
 import { NotFoundError } from '../lib/errors';
 import { ANONYMOUS, authorize, briefAbilities, classAbilities, studioAbilities, tutorialAbilities, type Actor } from '../policies';
 import { findBrief } from './briefs';
+import { findTutorialWithAuthor } from './tutorials';
 
 /**
  * Loaders: find a record, work out who is asking (the `Actor`) and ask the record's policy. They
@@ -45,7 +46,7 @@ export async function loadStudio(user: User, id: string) {
  */
 export async function loadTutorial(user: User, id: string, o: { withAuthor?: boolean } = {}) {
   // The author (id and name) in the same query when the answer shows them.
-  const tutorial = await Tutorial.findByPk(id, o.withAuthor ? { include: [{ model: User, as: 'author', attributes: ['id', 'name'] }] } : {});
+  const tutorial = o.withAuthor ? await findTutorialWithAuthor(id) : await Tutorial.findByPk(id);
   if (!tutorial) throw new NotFoundError('Tutorial');
   const actor = await actorIn(user, tutorial.studioId);
   const abilities = tutorialAbilities(actor, tutorial);

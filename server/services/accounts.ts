@@ -1,10 +1,11 @@
-import { Op, type Transaction } from 'sequelize';
+import { Op, type InferAttributes, type Transaction } from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
 import type { InvitationPreviewDto, SignUpInput, StudioMembershipDto } from '@shared/schemas/auth';
 import { Invitation, Membership, PasswordReset, Studio, User, sequelize } from '../models';
 import { BadRequestError, ConflictError, ForbiddenError, GoneError, InvalidInputError, NotFoundError, NotSignedInError } from '../lib/errors';
 import { config } from '../config';
 import { retryOnUnique, violatedConstraint } from '../lib/unique';
+import { columnsOf, selectRows, stored } from '../lib/plain-rows';
 import { studioAbilities } from '../policies';
 import { burnPasswordCheck, hashPassword, verifyPassword } from './passwords';
 import { hashToken, newToken } from './tokens';
@@ -17,6 +18,28 @@ const STUDIO_SLUG = 'studios_slug_key';
 
 const RESET_TTL_MS = 60 * 60_000;
 const INVITE_TTL_MS = 14 * 24 * 60 * 60_000;
+
+type SignedInRow = InferAttributes<User> & { memberships: { id: string; studioId: string; role: Role }[] };
+
+/**
+ * The signed-in person with their roles, read on every request: one plain query, the roles
+ * gathered by PostgreSQL's json_agg (see lib/plain-rows for why not Sequelize's include).
+ */
+export async function findSignedInUser(id: string): Promise<User | null> {
+  const [row] = await selectRows<SignedInRow>(
+    `SELECT ${columnsOf(User, 'u')},
+            COALESCE(json_agg(json_build_object('id', m.id, 'studioId', m.studio_id, 'role', m.role)) FILTER (WHERE m.id IS NOT NULL), '[]'::json) AS memberships
+       FROM users u LEFT JOIN memberships m ON m.user_id = u.id
+      WHERE u.id = :id
+      GROUP BY u.id`,
+    { id },
+  );
+  if (!row) return null;
+  const { memberships, ...attributes } = row;
+  const user = stored(User, attributes);
+  user.memberships = memberships.map((m) => stored(Membership, { ...m, userId: id }));
+  return user;
+}
 
 /** The studios a person belongs to, with their role in each. */
 export async function studiosOf(userId: string): Promise<StudioMembershipDto[]> {

@@ -1,15 +1,14 @@
-import { Op, type WhereOptions } from 'sequelize';
+import type { InferAttributes } from 'sequelize';
 import type { z } from 'zod';
 import type { createTutorialSchema, listTutorialsQuery, updateTutorialSchema } from '@shared/schemas/tutorial';
 import { Tutorial, User, type Studio } from '../models';
 import { containsPattern } from '../lib/like';
 import { retryOnUnique } from '../lib/unique';
+import { columnsOf, selectRows, stored } from '../lib/plain-rows';
 import { uniqueTutorialSlug } from './studios';
 
 /** The unique index on (studio, slug) (migration create-tutorials). */
 const TUTORIAL_SLUG = 'tutorials_studio_slug';
-
-const withAuthor = { model: User, as: 'author', attributes: ['id', 'name'] };
 
 /** A new draft by its maker, with a slug unique in the studio. */
 export async function createTutorial(studio: Studio, author: User, input: z.output<typeof createTutorialSchema>): Promise<Tutorial> {
@@ -46,11 +45,33 @@ export async function deleteTutorial(tutorial: Tutorial): Promise<void> {
  * than published finds nothing), so a chip never shows what it does not name.
  */
 export async function listTutorials(studio: Studio, o: { seeAll: boolean } & z.output<typeof listTutorialsQuery>): Promise<Tutorial[]> {
-  const where: WhereOptions<Tutorial> = { studioId: studio.id };
-  if (!o.seeAll) {
-    if (o.state && o.state !== 'published') return [];
-    Object.assign(where, { state: 'published' });
-  } else if (o.state) Object.assign(where, { state: o.state });
-  if (o.q) Object.assign(where, { title: { [Op.iLike]: containsPattern(o.q) } });
-  return Tutorial.findAll({ where, include: [withAuthor], order: [['updatedAt', 'DESC']] });
+  if (!o.seeAll && o.state && o.state !== 'published') return [];
+  const state = o.seeAll ? o.state : 'published';
+  return selectTutorials(
+    `t.studio_id = :studioId${state ? ' AND t.state = :state' : ''}${o.q ? ' AND t.title ILIKE :pattern' : ''} ORDER BY t.updated_at DESC`,
+    { studioId: studio.id, state, pattern: o.q ? containsPattern(o.q) : null },
+  );
+}
+
+/** One tutorial with its author (id and name), or null. */
+export async function findTutorialWithAuthor(id: string): Promise<Tutorial | null> {
+  const [t] = await selectTutorials('t.id = :id', { id });
+  return t ?? null;
+}
+
+type AuthorRow = { author: { id: string; name: string } | null };
+
+/** Tutorials with their authors in one plain query (the hot reads: see lib/plain-rows). */
+async function selectTutorials(whereAndOrder: string, replacements: Record<string, unknown>): Promise<Tutorial[]> {
+  const rows = await selectRows<InferAttributes<Tutorial> & AuthorRow>(
+    `SELECT ${columnsOf(Tutorial, 't')}, CASE WHEN a.id IS NULL THEN NULL ELSE json_build_object('id', a.id, 'name', a.name) END AS author
+       FROM tutorials t LEFT JOIN users a ON a.id = t.author_id
+      WHERE ${whereAndOrder}`,
+    replacements,
+  );
+  return rows.map(({ author, ...attributes }) => {
+    const t = stored(Tutorial, attributes);
+    if (author) t.author = stored(User, author);
+    return t;
+  });
 }

@@ -1,0 +1,37 @@
+import { QueryTypes, type Model, type ModelStatic } from 'sequelize';
+import { sequelize } from '../db';
+
+const selectLists = new Map<string, string>();
+
+/**
+ * Every attribute of a model as a select list under an alias (`t.created_at AS "createdAt", …`),
+ * worked out once per model and alias from the model's own definition.
+ */
+export function columnsOf(model: ModelStatic<Model>, alias: string): string {
+  const key = `${model.name} ${alias}`;
+  let list = selectLists.get(key);
+  if (!list) {
+    list = Object.entries(model.getAttributes())
+      .map(
+        ([name, a]) => `${alias}.${sequelize.getQueryInterface().quoteIdentifier(a.field ?? name)} AS ${sequelize.getQueryInterface().quoteIdentifier(name)}`,
+      )
+      .join(', ');
+    selectLists.set(key, list);
+  }
+  return list;
+}
+
+/**
+ * Runs a plain SELECT and hands back its rows. For the reads every signed-in request makes:
+ * Sequelize's finders rebuild the SQL and group joined rows on each call, which cost more than
+ * the query itself (issue 16's profile). The values come through Sequelize's own connections, so
+ * its type parsers (dates, date-only strings) apply as they do for the finders.
+ */
+export function selectRows<R extends object>(sql: string, replacements: Record<string, unknown>): Promise<R[]> {
+  return sequelize.query<R>(sql, { replacements, type: QueryTypes.SELECT });
+}
+
+/** A stored instance of a model from a row read by `selectRows` (no setters run, saves as an update). */
+export function stored<M extends Model>(model: ModelStatic<M>, row: object): M {
+  return model.build(row as M['_creationAttributes'], { isNewRecord: false, raw: true });
+}
