@@ -12,7 +12,14 @@ const databaseUrl = await ensureDatabase('cardwright_bench', { fresh: true });
 const mediaDir = path.join(PROJECT_ROOT, 'bench/out/media');
 rmSync(mediaDir, { recursive: true, force: true });
 mkdirSync(mediaDir, { recursive: true });
-Object.assign(process.env, { DATABASE_URL: databaseUrl, MEDIA_DIR: mediaDir, WORKERS: 'off', BCRYPT_ROUNDS: '10', NODE_ENV: 'production', SMTP_PORT: '2799' });
+Object.assign(process.env, {
+  DATABASE_URL: databaseUrl,
+  MEDIA_DIR: mediaDir,
+  WORKERS: process.env.WORKERS === 'on' ? 'on' : 'off',
+  BCRYPT_ROUNDS: '10',
+  NODE_ENV: 'production',
+  SMTP_PORT: '2799',
+});
 
 const { migrate } = await import('../../server/services/database');
 await migrate();

@@ -7,10 +7,14 @@ import { PROJECT_ROOT } from '../../scripts/lib/cluster';
 
 export type BenchServer = { port: number; pid: number; tutorialId: string; email: string; password: string; databaseUrl: string; child: ChildProcess };
 
-/** Starts bench-server.ts in a child process and waits for its JSON line. */
-export async function startBenchServer(): Promise<BenchServer> {
+/**
+ * Starts bench-server.ts in a child process and waits for its JSON line. `workers`: the queue
+ * workers run in the server process, as `npm start` runs them (default: off, nothing but the API).
+ */
+export async function startBenchServer(o: { workers?: boolean } = {}): Promise<BenchServer> {
   const child = spawn(process.execPath, [path.join(PROJECT_ROOT, 'node_modules/tsx/dist/cli.mjs'), path.join(PROJECT_ROOT, 'bench/support/bench-server.ts')], {
     cwd: PROJECT_ROOT,
+    env: { ...process.env, WORKERS: o.workers ? 'on' : 'off' },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
   const lines = createInterface({ input: child.stdout! });
