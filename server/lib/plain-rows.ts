@@ -22,16 +22,27 @@ export function columnsOf(model: ModelStatic<Model>, alias: string): string {
 }
 
 /**
- * Runs a plain SELECT and hands back its rows. For the reads every signed-in request makes:
+ * Runs a plain SELECT with bound parameters (`$name` in the SQL) and hands back its rows. For the reads every signed-in request makes:
  * Sequelize's finders rebuild the SQL and group joined rows on each call, which cost more than
  * the query itself (issue 16's profile). The values come through Sequelize's own connections, so
  * its type parsers (dates, date-only strings) apply as they do for the finders.
  */
-export function selectRows<R extends object>(sql: string, replacements: Record<string, unknown>): Promise<R[]> {
-  return sequelize.query<R>(sql, { replacements, type: QueryTypes.SELECT });
+export function selectRows<R extends object>(sql: string, bind: Record<string, unknown>): Promise<R[]> {
+  return sequelize.query<R>(sql, { bind, type: QueryTypes.SELECT });
 }
 
 /** A stored instance of a model from a row read by `selectRows` (no setters run, saves as an update). */
 export function stored<M extends Model>(model: ModelStatic<M>, row: object): M {
   return model.build(row as M['_creationAttributes'], { isNewRecord: false, raw: true });
+}
+
+/** A record by id through a plain select (`findByPk` for the hot reads), or null. */
+export async function findStored<M extends Model>(model: ModelStatic<M>, id: string): Promise<M | null> {
+  const [row] = await selectRows(
+    `SELECT ${columnsOf(model, 'r')} FROM ${sequelize.getQueryInterface().quoteIdentifier(String(model.getTableName()))} r WHERE r.id = $id`,
+    {
+      id,
+    },
+  );
+  return row ? stored(model, row) : null;
 }

@@ -3,6 +3,7 @@ import type { ExportVersion } from '@shared/schemas/publish';
 import type { BundleSource } from './publish/bundle';
 import { Chapter, CraftClass, Membership, Recording, Still, Studio, Tutorial, type User } from '../models';
 import { NotFoundError } from '../lib/errors';
+import { findStored } from '../lib/plain-rows';
 import { ANONYMOUS, authorize, briefAbilities, classAbilities, studioAbilities, tutorialAbilities, type Actor } from '../policies';
 import { findBrief } from './briefs';
 import { findTutorialWithAuthor } from './tutorials';
@@ -32,7 +33,7 @@ export async function actorIn(user: User | null, studioId: string): Promise<Acto
 
 /** A studio for one of its members; outsiders get 404. */
 export async function loadStudio(user: User, id: string) {
-  const studio = await Studio.findByPk(id);
+  const studio = await findStored(Studio, id);
   if (!studio) throw new NotFoundError('Studio');
   const actor = await actorIn(user, studio.id);
   const abilities = studioAbilities(actor);
@@ -46,7 +47,7 @@ export async function loadStudio(user: User, id: string) {
  */
 export async function loadTutorial(user: User, id: string, o: { withAuthor?: boolean } = {}) {
   // The author (id and name) in the same query when the answer shows them.
-  const tutorial = o.withAuthor ? await findTutorialWithAuthor(id) : await Tutorial.findByPk(id);
+  const tutorial = o.withAuthor ? await findTutorialWithAuthor(id) : await findStored(Tutorial, id);
   if (!tutorial) throw new NotFoundError('Tutorial');
   const actor = await actorIn(user, tutorial.studioId);
   const abilities = tutorialAbilities(actor, tutorial);

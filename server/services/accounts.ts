@@ -30,7 +30,7 @@ export async function findSignedInUser(id: string): Promise<User | null> {
     `SELECT ${columnsOf(User, 'u')},
             COALESCE(json_agg(json_build_object('id', m.id, 'studioId', m.studio_id, 'role', m.role)) FILTER (WHERE m.id IS NOT NULL), '[]'::json) AS memberships
        FROM users u LEFT JOIN memberships m ON m.user_id = u.id
-      WHERE u.id = :id
+      WHERE u.id = $id
       GROUP BY u.id`,
     { id },
   );

@@ -48,26 +48,26 @@ export async function listTutorials(studio: Studio, o: { seeAll: boolean } & z.o
   if (!o.seeAll && o.state && o.state !== 'published') return [];
   const state = o.seeAll ? o.state : 'published';
   return selectTutorials(
-    `t.studio_id = :studioId${state ? ' AND t.state = :state' : ''}${o.q ? ' AND t.title ILIKE :pattern' : ''} ORDER BY t.updated_at DESC`,
-    { studioId: studio.id, state, pattern: o.q ? containsPattern(o.q) : null },
+    `t.studio_id = $studioId${state ? ' AND t.state = $state' : ''}${o.q ? ' AND t.title ILIKE $pattern' : ''} ORDER BY t.updated_at DESC`,
+    { studioId: studio.id, ...(state && { state }), ...(o.q && { pattern: containsPattern(o.q) }) },
   );
 }
 
 /** One tutorial with its author (id and name), or null. */
 export async function findTutorialWithAuthor(id: string): Promise<Tutorial | null> {
-  const [t] = await selectTutorials('t.id = :id', { id });
+  const [t] = await selectTutorials('t.id = $id', { id });
   return t ?? null;
 }
 
 type AuthorRow = { author: { id: string; name: string } | null };
 
 /** Tutorials with their authors in one plain query (the hot reads: see lib/plain-rows). */
-async function selectTutorials(whereAndOrder: string, replacements: Record<string, unknown>): Promise<Tutorial[]> {
+async function selectTutorials(whereAndOrder: string, bind: Record<string, unknown>): Promise<Tutorial[]> {
   const rows = await selectRows<InferAttributes<Tutorial> & AuthorRow>(
     `SELECT ${columnsOf(Tutorial, 't')}, CASE WHEN a.id IS NULL THEN NULL ELSE json_build_object('id', a.id, 'name', a.name) END AS author
        FROM tutorials t LEFT JOIN users a ON a.id = t.author_id
       WHERE ${whereAndOrder}`,
-    replacements,
+    bind,
   );
   return rows.map(({ author, ...attributes }) => {
     const t = stored(Tutorial, attributes);
