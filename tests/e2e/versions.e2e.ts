@@ -89,6 +89,11 @@ describe('a published tutorial and its update in the browser (DESIGN.md T4)', ()
     await expect.poll(() => coordStatus.getByText('Done: the tutorial is now published.').isVisible()).toBe(true);
     expect(await page()).toContain('linen band');
     await expect.poll(() => coord.getByText('This tutorial is live.').isVisible()).toBe(true);
+    // The history tells the update's moves from the first review's.
+    const history = coord.getByRole('region', { name: 'History' });
+    await expect.poll(() => history.getByText(/published the update/).isVisible()).toBe(true);
+    await expect.poll(() => history.getByText(/approved the update/).isVisible()).toBe(true);
+    await expect.poll(() => history.getByText(/sent the update for review/).isVisible()).toBe(true);
 
     expect(
       [

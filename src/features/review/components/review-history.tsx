@@ -3,20 +3,13 @@ import { STATE_LABELS } from '@shared/schemas/tutorial';
 import { Notice } from '@/components/ui/notice';
 import { Loading } from '@/components/ui/spinner';
 import { useHistory } from '../api/get-history';
-
-const VERB: Record<string, string> = {
-  submit: 'sent it for review',
-  approve: 'approved it',
-  sendBack: 'sent it back',
-  publish: 'published it',
-  unpublish: 'unpublished it',
-};
+import { moveVerb } from '../utils/move-words';
 
 const when = (iso: string) => new Date(iso).toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 function Move({ m }: { m: StateChangeDto }) {
   const who = m.by?.name ?? 'Cardwright';
-  const verb = VERB[m.action] ?? `moved it from ${STATE_LABELS[m.from]} to ${STATE_LABELS[m.to]}`;
+  const verb = moveVerb(m);
   return (
     <li className="border-l-2 border-line pl-3">
       <p className="text-sm">
