@@ -3,6 +3,7 @@
  * "front panel", "mat") and which material they said ("from the kraft cardstock"). Pure and
  * deterministic, so the server's "make pieces" and the browser's previews agree.
  */
+import { COLOUR_WORDS } from './colour-words';
 
 /** What was said around a mention: the clause before it, the words after it, the mention's own words, and the topic (its chapter's title). */
 export type MentionWords = { before: string; said: string; after: string; topic?: string };
@@ -93,24 +94,7 @@ const MATERIAL_WORDS = new Set([
   'watercolour',
   'plain',
   'solid',
-  'white',
-  'black',
-  'cream',
-  'ivory',
-  'red',
-  'blue',
-  'green',
-  'pink',
-  'yellow',
-  'orange',
-  'purple',
-  'gold',
-  'silver',
-  'grey',
-  'gray',
-  'brown',
-  'navy',
-  'teal',
+  ...COLOUR_WORDS,
   'coordinating',
   'contrasting',
   'heavyweight',

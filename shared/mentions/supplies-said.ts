@@ -5,6 +5,7 @@
  * list every time it runs.
  */
 import type { SupplyCategory } from '../schemas/supply';
+import { COLOUR_WORDS } from './colour-words';
 
 /** One supply said: its name as said, its category, a quantity when one was said, and where. */
 export type SaidSupply = { name: string; category: SupplyCategory; quantity: string; head: string; saidAtMs: number };
@@ -84,24 +85,7 @@ const MODIFIERS = new Set([
   'watercolour',
   'heavyweight',
   'lightweight',
-  'white',
-  'black',
-  'cream',
-  'ivory',
-  'red',
-  'blue',
-  'green',
-  'pink',
-  'yellow',
-  'orange',
-  'purple',
-  'gold',
-  'silver',
-  'grey',
-  'gray',
-  'brown',
-  'navy',
-  'teal',
+  ...COLOUR_WORDS,
   'coordinating',
   'liquid',
   'strong',

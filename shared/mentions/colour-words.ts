@@ -1,0 +1,21 @@
+/** Colour words a crafter says before a paper or a supply ("white cardstock", "gold cord"), both spellings of grey. */
+export const COLOUR_WORDS = [
+  'white',
+  'black',
+  'cream',
+  'ivory',
+  'red',
+  'blue',
+  'green',
+  'pink',
+  'yellow',
+  'orange',
+  'purple',
+  'gold',
+  'silver',
+  'grey',
+  'gray',
+  'brown',
+  'navy',
+  'teal',
+] as const;
