@@ -125,10 +125,7 @@ const DEFAULT_STOCK = sheetSize('12x12')!;
  * The stock sheet a material is cut from, found by name (any case); a material with no row yet
  * gets the default 12 x 12 in sheet, pieces may turn.
  */
-/** What a stock sheet needs of a material: a live row or one kept in a version. */
-export type StockMaterial = Pick<Material, 'id' | 'name' | 'sheetWidth' | 'sheetHeight' | 'rotate' | 'grain'>;
-
-export function stockOf<M extends StockMaterial>(materials: readonly M[], name: string) {
+export function stockOf(materials: readonly Material[], name: string) {
   const material = materials.find((m) => m.name.toLowerCase() === name.toLowerCase());
   if (!material) return { material, width: DEFAULT_STOCK.width, height: DEFAULT_STOCK.height, rotate: true, grain: 'none' as SheetGrain, unreadable: false };
   const width = storedLengthOrNull(material.sheetWidth);

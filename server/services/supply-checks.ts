@@ -7,9 +7,9 @@
 import { supplySheetChecks, unresolvedSheetWarnings, type PlannedMaterial } from '@shared/supplies/sheet-checks';
 import type { SheetPlanDto } from '@shared/schemas/sheet-plan';
 import type { SupplySheetCheckDto } from '@shared/schemas/supply';
-import { Supply, TutorialVersion, type Tutorial } from '../models';
+import type { Tutorial } from '../models';
 import { UnprocessableError } from '../lib/errors';
-import { sheetPlanJson, sheetPlanJsonOf } from './sheet-plan';
+import { sheetPlanJson } from './sheet-plan';
 import { loadSupplies } from './supplies';
 
 /** "12 x 12 in" as a supply line says it, from "12 in" and "12 in" (the unit once when both share it). */
@@ -19,9 +19,9 @@ function sheetLabel(width: string, height: string): string {
 }
 
 /** Each material's plan for one make, trusted only when every piece fitted and the search finished. */
-async function plannedMaterials(planJson: () => Promise<string>): Promise<PlannedMaterial[]> {
+async function plannedMaterials(tutorial: Tutorial): Promise<PlannedMaterial[]> {
   try {
-    const plan = JSON.parse(await planJson()) as SheetPlanDto;
+    const plan = JSON.parse(await sheetPlanJson(tutorial, 1, 0)) as SheetPlanDto;
     return plan.materials.map((m) => ({
       material: m.material,
       sheets: m.sheets,
@@ -37,7 +37,7 @@ async function plannedMaterials(planJson: () => Promise<string>): Promise<Planne
 
 /** The cross-checks of a tutorial's supplies and the warnings nobody has resolved or accepted. */
 export async function supplyChecks(tutorial: Tutorial): Promise<{ checks: SupplySheetCheckDto[]; unresolved: string[] }> {
-  const [{ rows }, plans] = await Promise.all([loadSupplies(tutorial), plannedMaterials(() => sheetPlanJson(tutorial, 1, 0))]);
+  const [{ rows }, plans] = await Promise.all([loadSupplies(tutorial), plannedMaterials(tutorial)]);
   const checks = supplySheetChecks(
     rows.map((s) => ({ id: s.id, name: s.name, category: s.category, quantity: s.quantity, acceptedSheetNeed: s.acceptedSheetNeed ?? null })),
     plans,
@@ -45,31 +45,10 @@ export async function supplyChecks(tutorial: Tutorial): Promise<{ checks: Supply
   return { checks, unresolved: unresolvedSheetWarnings(checks) };
 }
 
-/**
- * The warnings publishing must have confirmed: open supply cross-checks of what publishing makes
- * live, the approved version (its supplies against its own cut list's plan), or the draft when
- * nothing was kept. A count kept on purpose is read from the supply line it was kept on.
- */
+/** The warnings publishing must have confirmed: open supply cross-checks. */
 export async function publishWarnings(tutorial: Tutorial): Promise<string[]> {
-  const approved = tutorial.approvedVersionId ? await TutorialVersion.findByPk(tutorial.approvedVersionId) : null;
-  if (!approved) {
-    const rows = await loadSupplies(tutorial);
-    // No supply counts sheets: nothing to plan for.
-    if (!rows.rows.some((s) => countsSheets(s.quantity))) return [];
-    return (await supplyChecks(tutorial)).unresolved;
-  }
-  const { supplies, pieces, materials } = approved.content;
-  if (!supplies.some((s) => countsSheets(s.quantity))) return [];
-  const [kept, plans] = await Promise.all([
-    Supply.findAll({ where: { id: supplies.map((s) => s.id) }, attributes: ['id', 'acceptedSheetNeed'] }),
-    plannedMaterials(() => sheetPlanJsonOf(pieces, materials, 1, 0)),
-  ]);
-  const accepted = new Map(kept.map((s) => [s.id, s.acceptedSheetNeed ?? null]));
-  const checks = supplySheetChecks(
-    supplies.map((s) => ({ id: s.id, name: s.name, category: s.category, quantity: s.quantity, acceptedSheetNeed: accepted.get(s.id) ?? null })),
-    plans,
-  );
-  return unresolvedSheetWarnings(checks);
+  const rows = await loadSupplies(tutorial);
+  // No supply counts sheets: nothing to plan for.
+  if (!rows.rows.some((s) => /\d|sheet/i.test(s.quantity))) return [];
+  return (await supplyChecks(tutorial)).unresolved;
 }
-
-const countsSheets = (quantity: string) => /\d|sheet/i.test(quantity);

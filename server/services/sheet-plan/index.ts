@@ -3,7 +3,7 @@ import { LENGTH_PARAMS, type StoredShapeParams } from '@shared/geometry';
 import { SHEET_PLAN_LIMITS, sheetPlanTooLarge, type SheetPlanDto } from '@shared/schemas/sheet-plan';
 import { Material, PieceRow, type Tutorial } from '../../models';
 import { UnprocessableError } from '../../lib/errors';
-import { stockOf, type StockMaterial } from '../cut-list';
+import { stockOf } from '../cut-list';
 import { planMaterials, type MaterialJob } from './plan-materials';
 import { PlanPool } from './worker-pool';
 
@@ -36,24 +36,11 @@ export async function sheetPlanJson(tutorial: Tutorial, kits: number, spares: nu
     }),
     Material.findAll({ where: { tutorialId: tutorial.id }, order: [['name', 'ASC']] }),
   ]);
-  return sheetPlanJsonOf(pieces, materials, kits, spares);
-}
-
-/** The pieces a plan reads: a live row (raw) or one kept in a version. */
-export type PlannedPiece = Pick<PieceRow, 'name' | 'material' | 'quantity' | 'shape' | 'params' | 'grain' | 'width' | 'height'>;
-
-/** The same plan from pieces and materials already read (a kept version's, for what publishing makes live). */
-export async function sheetPlanJsonOf(
-  pieces: readonly PlannedPiece[],
-  materials: readonly StockMaterial[],
-  kits: number,
-  spares: number,
-): Promise<SheetPlanJson> {
   const perSet = pieces.reduce((s, p) => s + p.quantity, 0);
   const tooLarge = sheetPlanTooLarge(pieces.length, perSet, kits + spares);
   if (tooLarge) throw new UnprocessableError(tooLarge, { limit: SHEET_PLAN_LIMITS, requested: { pieces: pieces.length, copies: perSet * (kits + spares) } });
 
-  const groups = new Map<string, PlannedPiece[]>();
+  const groups = new Map<string, typeof pieces>();
   for (const p of pieces) groups.set(p.material, [...(groups.get(p.material) ?? []), p]);
   const jobs: MaterialJob[] = [...groups.entries()].map(([name, list]) => {
     const { material: m, width, height, rotate, grain, unreadable } = stockOf(materials, name);
