@@ -2,6 +2,7 @@ import { QueryTypes, type Model, type ModelStatic } from 'sequelize';
 import { sequelize } from '../db';
 
 const selectLists = new Map<string, string>();
+const quote = (name: string) => sequelize.getQueryInterface().quoteIdentifier(name);
 
 /**
  * Every attribute of a model as a select list under an alias (`t.created_at AS "createdAt", …`),
@@ -12,9 +13,7 @@ export function columnsOf(model: ModelStatic<Model>, alias: string): string {
   let list = selectLists.get(key);
   if (!list) {
     list = Object.entries(model.getAttributes())
-      .map(
-        ([name, a]) => `${alias}.${sequelize.getQueryInterface().quoteIdentifier(a.field ?? name)} AS ${sequelize.getQueryInterface().quoteIdentifier(name)}`,
-      )
+      .map(([name, a]) => `${alias}.${quote(a.field ?? name)} AS ${quote(name)}`)
       .join(', ');
     selectLists.set(key, list);
   }
@@ -22,10 +21,11 @@ export function columnsOf(model: ModelStatic<Model>, alias: string): string {
 }
 
 /**
- * Runs a plain SELECT with bound parameters (`$name` in the SQL) and hands back its rows. For the reads every signed-in request makes:
- * Sequelize's finders rebuild the SQL and group joined rows on each call, which cost more than
- * the query itself (issue 16's profile). The values come through Sequelize's own connections, so
- * its type parsers (dates, date-only strings) apply as they do for the finders.
+ * Runs a plain SELECT with bound parameters (`$name` in the SQL) and hands back its rows. For the
+ * reads every signed-in request makes: Sequelize's finders rebuild the SQL and group joined rows
+ * on each call, which cost more than the query itself (issue 16's profile). The values come
+ * through Sequelize's own connections, so its type parsers (dates, date-only strings) apply as
+ * they do for the finders.
  */
 export function selectRows<R extends object>(sql: string, bind: Record<string, unknown>): Promise<R[]> {
   return sequelize.query<R>(sql, { bind, type: QueryTypes.SELECT });
@@ -38,11 +38,6 @@ export function stored<M extends Model>(model: ModelStatic<M>, row: object): M {
 
 /** A record by id through a plain select (`findByPk` for the hot reads), or null. */
 export async function findStored<M extends Model>(model: ModelStatic<M>, id: string): Promise<M | null> {
-  const [row] = await selectRows(
-    `SELECT ${columnsOf(model, 'r')} FROM ${sequelize.getQueryInterface().quoteIdentifier(String(model.getTableName()))} r WHERE r.id = $id`,
-    {
-      id,
-    },
-  );
+  const [row] = await selectRows(`SELECT ${columnsOf(model, 'r')} FROM ${quote(String(model.getTableName()))} r WHERE r.id = $id`, { id });
   return row ? stored(model, row) : null;
 }
