@@ -37,20 +37,7 @@ export const TENS: ReadonlyMap<string, number> = new Map([
 ]);
 
 /** Single digits as read after "point" ("one point oh five"). */
-export const DIGIT_WORDS: ReadonlyMap<string, number> = new Map([
-  ['zero', 0],
-  ['oh', 0],
-  ['o', 0],
-  ['one', 1],
-  ['two', 2],
-  ['three', 3],
-  ['four', 4],
-  ['five', 5],
-  ['six', 6],
-  ['seven', 7],
-  ['eight', 8],
-  ['nine', 9],
-]);
+export const DIGIT_WORDS: ReadonlyMap<string, number> = new Map([['oh', 0], ['o', 0], ...[...SMALL_NUMBERS].filter(([, n]) => n < 10)]);
 
 /**
  * Fraction denominators in words, singular and plural alike since speakers

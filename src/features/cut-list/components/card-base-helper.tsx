@@ -71,6 +71,19 @@ function FlatCard({ r }: { r: CardBaseResult }) {
   );
 }
 
+/** The lengths only some folds ask for (`cardFields` says which), in the order they are shown. */
+const OPTIONAL_LENGTHS: { key: keyof ReturnType<typeof cardFields>; label: string; placeholder: string; hint?: string }[] = [
+  { key: 'relief', label: 'Relief', placeholder: '1/16 in if left empty', hint: 'The gap where flaps meet, so they do not rub' },
+  {
+    key: 'caliper',
+    label: 'Stock thickness (caliper)',
+    placeholder: 'e.g. 0.011 in or 0.28 mm',
+    hint: 'For heavy stock: a tucked panel gives up about one caliper',
+  },
+  { key: 'outerFlap', label: 'Outer flap', placeholder: 'as wide as the inner flap' },
+  { key: 'stopper', label: 'Stopper from the bottom edge', placeholder: 'half the height if left empty' },
+];
+
 /** The flat card base and its score lines from the finished size and fold, with relief, fold allowance, shutter flaps and the easel's stopper. */
 export function CardBaseHelper() {
   const { defaultUnit, precision } = useCutList();
@@ -96,44 +109,17 @@ export function CardBaseHelper() {
           </SelectField>
           <p className="mt-1 text-xs text-pencil">{FOLD_HINTS[f.fold]}</p>
         </div>
-        {use.relief && (
+        {OPTIONAL_LENGTHS.filter((o) => use[o.key]).map((o) => (
           <HelperLength
-            label="Relief"
-            placeholder="1/16 in if left empty"
-            value={f.relief ?? ''}
-            onChange={set('relief')}
-            error={errors.relief}
-            hint="The gap where flaps meet, so they do not rub"
+            key={o.key}
+            label={o.label}
+            placeholder={o.placeholder}
+            value={f[o.key] ?? ''}
+            onChange={set(o.key)}
+            error={errors[o.key]}
+            hint={o.hint}
           />
-        )}
-        {use.caliper && (
-          <HelperLength
-            label="Stock thickness (caliper)"
-            placeholder="e.g. 0.011 in or 0.28 mm"
-            value={f.caliper ?? ''}
-            onChange={set('caliper')}
-            error={errors.caliper}
-            hint="For heavy stock: a tucked panel gives up about one caliper"
-          />
-        )}
-        {use.outerFlap && (
-          <HelperLength
-            label="Outer flap"
-            placeholder="as wide as the inner flap"
-            value={f.outerFlap ?? ''}
-            onChange={set('outerFlap')}
-            error={errors.outerFlap}
-          />
-        )}
-        {use.stopper && (
-          <HelperLength
-            label="Stopper from the bottom edge"
-            placeholder="half the height if left empty"
-            value={f.stopper ?? ''}
-            onChange={set('stopper')}
-            error={errors.stopper}
-          />
-        )}
+        ))}
       </div>
       {r.ok ? (
         <div className="mt-4">
