@@ -7,6 +7,21 @@ import { storage } from '../storage';
 import { EMPTY_DOC } from '../write-up';
 
 /**
+ * Runs the reads at once on the pool, or one after the other inside a transaction: a
+ * transaction's queries share its one connection, and pg refuses overlapping queries on a client
+ * (a deprecation warning now, an error from pg 9).
+ */
+async function together<T extends readonly (() => Promise<unknown>)[]>(
+  transaction: Transaction | undefined,
+  reads: T,
+): Promise<{ -readonly [K in keyof T]: Awaited<ReturnType<T[K]>> }> {
+  if (!transaction) return (await Promise.all(reads.map((read) => read()))) as never;
+  const out: unknown[] = [];
+  for (const read of reads) out.push(await read());
+  return out as never;
+}
+
+/**
  * The draft's content in the shape a version keeps: what readers would see if it went out now.
  * Exports of a tutorial that is not published yet are rendered from this too, so a draft and a
  * version always reach the renderers through the same path (and compare like for like).
@@ -14,32 +29,34 @@ import { EMPTY_DOC } from '../write-up';
 export async function draftContent(tutorial: Tutorial, transaction?: Transaction): Promise<VersionContent> {
   const t = { transaction };
   const where = { tutorialId: tutorial.id };
-  const [article, pieces, materials, supplies, recording] = await Promise.all([
-    Article.findByPk(tutorial.id, t),
-    PieceRow.findAll({
-      where,
-      order: [
-        ['position', 'ASC'],
-        ['createdAt', 'ASC'],
-      ],
-      ...t,
-    }),
-    Material.findAll({ where, order: [['name', 'ASC']], ...t }),
-    Supply.findAll({
-      where,
-      order: [
-        ['position', 'ASC'],
-        ['createdAt', 'ASC'],
-      ],
-      ...t,
-    }),
-    Recording.findOne({ where, order: [['createdAt', 'DESC']], attributes: ['id'], ...t }),
-  ]);
+  const [article, pieces, materials, supplies, recording] = await together(transaction, [
+    () => Article.findByPk(tutorial.id, t),
+    () =>
+      PieceRow.findAll({
+        where,
+        order: [
+          ['position', 'ASC'],
+          ['createdAt', 'ASC'],
+        ],
+        ...t,
+      }),
+    () => Material.findAll({ where, order: [['name', 'ASC']], ...t }),
+    () =>
+      Supply.findAll({
+        where,
+        order: [
+          ['position', 'ASC'],
+          ['createdAt', 'ASC'],
+        ],
+        ...t,
+      }),
+    () => Recording.findOne({ where, order: [['createdAt', 'DESC']], attributes: ['id'], ...t }),
+  ] as const);
   const [chapters, stills] = recording
-    ? await Promise.all([
-        Chapter.findAll({ where: { recordingId: recording.id }, order: [['startMs', 'ASC']], ...t }),
-        Still.findAll({ where: { recordingId: recording.id }, order: [['atMs', 'ASC']], ...t }),
-      ])
+    ? await together(transaction, [
+        () => Chapter.findAll({ where: { recordingId: recording.id }, order: [['startMs', 'ASC']], ...t }),
+        () => Still.findAll({ where: { recordingId: recording.id }, order: [['atMs', 'ASC']], ...t }),
+      ] as const)
     : [[], []];
   const sponsored = supplies.some((s) => s.sponsored && s.url);
   return {
