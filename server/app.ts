@@ -34,7 +34,9 @@ import { paymentsRouter } from './routes/classes/payments.router';
 import { briefsRouter } from './routes/briefs/briefs.router';
 import { boardRouter } from './routes/board/board.router';
 import { closeSheetPlans } from './services/sheet-plan';
-import { listenForPublicPageChanges, watchPublishedContent } from './services/public-page-invalidation';
+import { publicPageChanges, watchPublishedContent } from './services/public-page-invalidation';
+import { keptSessions, signedInChanges, watchSignedInRows } from './services/signed-in-cache';
+import { listenForChanges } from './lib/change-listener';
 
 type Overrides = { config?: Partial<Config>; rateLimit?: Partial<Config['rateLimit']> };
 
@@ -69,7 +71,7 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   app.use(
     session({
       name: 'cardwright.sid',
-      store: throttledPgStore(pool),
+      store: throttledPgStore(pool, keptSessions),
       secret: config.sessionSecret,
       resave: false,
       saveUninitialized: false,
@@ -122,9 +124,11 @@ export function createApp(overrides: Overrides = {}): Express & { close: () => P
   }
 
   app.use(errorHandler);
-  // Public pages are cached in this process; these keep the copies honest when any process changes them.
+  // Public pages, sessions and signed-in people are kept in this process; these keep the copies
+  // honest when any process changes them.
   watchPublishedContent();
-  const stopListening = listenForPublicPageChanges(config.databaseUrl);
+  watchSignedInRows();
+  const stopListening = listenForChanges(config.databaseUrl, { ...publicPageChanges, ...signedInChanges });
   app.close = async () => {
     await stopListening();
     await closeSheetPlans();

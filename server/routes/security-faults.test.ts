@@ -5,6 +5,7 @@ import { createApp } from '@server/app';
 import { storage } from '@server/services/storage';
 import { stopQueue } from '@server/jobs';
 import { ffmpegMake, tempDir } from '@server/services/media/test-clips';
+import { heardEverything } from '@server/services/signed-in-cache';
 import { testApp } from '../../tests/harness/app';
 import { TestClient } from '../../tests/harness/client';
 import { makeStudio, makeUser, TEST_PASSWORD } from '../../tests/harness/factories';
@@ -261,9 +262,12 @@ describe('sessions and CSRF for signed-out forms', () => {
       sequelize.query(`UPDATE "session" SET sess = jsonb_set(sess::jsonb, '{signedInAt}', to_jsonb(:at::bigint))::json WHERE sess->>'userId' = :id`, {
         replacements: { id: u.id, at },
       });
+    // Each change by hand is heard before asking: the app keeps sessions in memory until told.
     await setSignedIn(ago(29));
+    await heardEverything();
     expect((await c.get('/api/auth/me')).status).toBe(200);
     await setSignedIn(ago(31));
+    await heardEverything();
     expect((await c.get('/api/auth/me')).status).toBe(401);
     expect(await rows()).toHaveLength(0);
   });

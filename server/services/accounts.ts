@@ -1,4 +1,4 @@
-import { Op, type InferAttributes, type Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
 import type { InvitationPreviewDto, SignUpInput, StudioMembershipDto } from '@shared/schemas/auth';
 import { Invitation, Membership, PasswordReset, Studio, User, sequelize } from '../models';
@@ -11,6 +11,7 @@ import { burnPasswordCheck, hashPassword, verifyPassword } from './passwords';
 import { hashToken, newToken } from './tokens';
 import { linkMail, sendMail } from './mail';
 import { uniqueStudioSlug } from './studios';
+import { forgetSessionsOf, keptPeople, type SignedInRow } from './signed-in-cache';
 
 /** Unique indexes a sign-up can run into (migration create-accounts: PostgreSQL's default names). */
 const USER_EMAIL = 'users_email_key';
@@ -19,22 +20,27 @@ const STUDIO_SLUG = 'studios_slug_key';
 const RESET_TTL_MS = 60 * 60_000;
 const INVITE_TTL_MS = 14 * 24 * 60 * 60_000;
 
-type SignedInRow = InferAttributes<User> & { memberships: { id: string; studioId: string; role: Role }[] };
-
 /**
  * The signed-in person with their roles, read on every request: one plain query, the roles
- * gathered by PostgreSQL's json_agg (see lib/plain-rows for why not Sequelize's include).
+ * gathered by PostgreSQL's json_agg (see lib/plain-rows for why not Sequelize's include). The row
+ * is kept for a few seconds and forgotten as soon as the person or a membership of theirs changes
+ * (services/signed-in-cache); each request gets model instances of its own.
  */
 export async function findSignedInUser(id: string): Promise<User | null> {
-  const [row] = await selectRows<SignedInRow>(
-    `SELECT ${columnsOf(User, 'u')},
-            COALESCE(json_agg(json_build_object('id', m.id, 'studioId', m.studio_id, 'role', m.role)) FILTER (WHERE m.id IS NOT NULL), '[]'::json) AS memberships
-       FROM users u LEFT JOIN memberships m ON m.user_id = u.id
-      WHERE u.id = $id
-      GROUP BY u.id`,
-    { id },
-  );
-  if (!row) return null;
+  let row = keptPeople.get(id);
+  if (!row) {
+    const mark = keptPeople.mark();
+    [row] = await selectRows<SignedInRow>(
+      `SELECT ${columnsOf(User, 'u')},
+              COALESCE(json_agg(json_build_object('id', m.id, 'studioId', m.studio_id, 'role', m.role)) FILTER (WHERE m.id IS NOT NULL), '[]'::json) AS memberships
+         FROM users u LEFT JOIN memberships m ON m.user_id = u.id
+        WHERE u.id = $id
+        GROUP BY u.id`,
+      { id },
+    );
+    if (!row) return null;
+    keptPeople.keep(id, row, mark);
+  }
   const { memberships, ...attributes } = row;
   const user = stored(User, attributes);
   user.memberships = memberships.map((m) => stored(Membership, { ...m, userId: id }));
@@ -194,6 +200,9 @@ export async function resetPassword(token: string, password: string): Promise<Us
 /** Ends every stored session of a person (express-session keeps them in the `session` table). */
 export async function endSessionsOf(userId: string, transaction?: Transaction): Promise<void> {
   await sequelize.query(`DELETE FROM "session" WHERE sess->>'userId' = :userId`, { replacements: { userId }, transaction });
+  // This process forgets them before the request answers; the others hear of it from the table's trigger.
+  if (transaction) transaction.afterCommit(() => forgetSessionsOf(userId));
+  else forgetSessionsOf(userId);
 }
 
 /**

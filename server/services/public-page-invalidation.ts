@@ -1,6 +1,6 @@
-import pg from 'pg';
 import type { Model, Transaction } from 'sequelize';
 import { Article, Chapter, Material, PieceRow, Recording, sequelize, Still, Studio, Supply, Tutorial, User } from '../models';
+import type { ChannelHandler } from '../lib/change-listener';
 import { dropLocalPublicPage, publicPage, setListening } from './public-pages';
 
 /**
@@ -92,45 +92,10 @@ export function watchPublishedContent(): void {
 }
 
 /**
- * Listens for other processes' changes on a connection of its own; returns the function that
- * stops it. Until it listens, and after a dropped connection, this process keeps no page (a change
- * may have been missed): it forgets them all on connecting and retries every second.
+ * The public pages' channel for `listenForChanges` (lib/change-listener): another process's change
+ * forgets the page here. Until this process listens, and after a dropped connection, it keeps no
+ * page (a change may have been missed).
  */
-export function listenForPublicPageChanges(databaseUrl: string): () => Promise<void> {
-  let client: pg.Client | null = null;
-  let stopped = false;
-  let retry: NodeJS.Timeout | undefined;
-  const again = () => {
-    setListening(false);
-    if (!stopped) retry = setTimeout(connect, 1000);
-  };
-  function connect() {
-    const c = new pg.Client({ connectionString: databaseUrl });
-    c.on('notification', (n) => {
-      if (n.channel === CHANNEL) dropLocalPublicPage(n.payload === ALL || !n.payload ? null : n.payload);
-    });
-    c.on('error', () => {
-      client = null;
-      void c.end().catch(() => {});
-      again();
-    });
-    c.connect()
-      .then(() => c.query(`LISTEN ${CHANNEL}`))
-      .then(() => {
-        if (stopped) return void c.end().catch(() => {});
-        client = c;
-        setListening(true);
-      })
-      .catch(() => {
-        void c.end().catch(() => {});
-        again();
-      });
-  }
-  connect();
-  return async () => {
-    stopped = true;
-    clearTimeout(retry);
-    setListening(false);
-    await client?.end().catch(() => {});
-  };
-}
+export const publicPageChanges: Record<string, ChannelHandler> = {
+  [CHANNEL]: { onNotify: (payload) => dropLocalPublicPage(payload === ALL || !payload ? null : payload), onListening: setListening },
+};
