@@ -41,3 +41,35 @@ export async function findStored<M extends Model>(model: ModelStatic<M>, id: str
   const [row] = await selectRows(`SELECT ${columnsOf(model, 'r')} FROM ${quote(String(model.getTableName()))} r WHERE r.id = $id`, { id });
   return row ? stored(model, row) : null;
 }
+
+const jsonObjects = new Map<string, string>();
+
+/**
+ * Every attribute of a model as one JSON object under an alias (`json_build_object('id', s.id, …)`),
+ * keyed by attribute name: for a joined record gathered into a row with `json_agg`.
+ */
+export function jsonOf(model: ModelStatic<Model>, alias: string): string {
+  const key = `${model.name} ${alias}`;
+  let sql = jsonObjects.get(key);
+  if (!sql) {
+    const pairs = Object.entries(model.getAttributes()).map(([name, a]) => `'${name}', ${alias}.${quote(a.field ?? name)}`);
+    sql = `json_build_object(${pairs.join(', ')})`;
+    jsonObjects.set(key, sql);
+  }
+  return sql;
+}
+
+/**
+ * A stored instance from an object built by `jsonOf`. JSON has no dates: a DATE attribute comes
+ * as PostgreSQL's ISO text with its offset and becomes a Date again (DATEONLY stays text, as
+ * Sequelize gives it). Other types arrive as JSON gives them: use it for text, uuid, integer,
+ * boolean, enum and json columns.
+ */
+export function storedFromJson<M extends Model>(model: ModelStatic<M>, json: Record<string, unknown>): M {
+  const row: Record<string, unknown> = { ...json };
+  for (const [name, a] of Object.entries(model.getAttributes())) {
+    const v = row[name];
+    if (typeof v === 'string' && (a.type as { key?: string }).key === 'DATE') row[name] = new Date(v);
+  }
+  return stored(model, row);
+}

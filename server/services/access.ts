@@ -31,9 +31,15 @@ export async function actorIn(user: User | null, studioId: string): Promise<Acto
   return { userId: user.id, role: await roleIn(user.id, studioId) };
 }
 
-/** A studio for one of its members; outsiders get 404. */
+/**
+ * A studio for one of its members; outsiders get 404. The signed-in person arrives with their
+ * studios (`loadUser`), so a member's studio comes from there and an outsider is answered without
+ * a query; a `User` loaded some other way has the studio read.
+ */
 export async function loadStudio(user: User, id: string) {
-  const studio = await findStored(Studio, id);
+  const membership = user.memberships?.find((m) => m.studioId === id);
+  // Known memberships and none here: an outsider, 404 whether or not the studio exists.
+  const studio = membership?.studio ?? (user.memberships && !membership ? null : await findStored(Studio, id));
   if (!studio) throw new NotFoundError('Studio');
   const actor = await actorIn(user, studio.id);
   const abilities = studioAbilities(actor);

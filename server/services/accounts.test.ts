@@ -27,6 +27,12 @@ describe('findSignedInUser (the person and their roles read on every request)', 
     const roles = (ms: readonly Membership[]) => ms.map((m) => ({ id: m.id, studioId: m.studioId, role: m.role })).sort((x, y) => x.id.localeCompare(y.id));
     expect(roles(found!.memberships!)).toEqual(roles(reference!.memberships!));
     expect(found!.memberships).toHaveLength(2);
+    // Each membership carries its studio, every field as Sequelize's findByPk reads it (dates as Dates).
+    for (const m of found!.memberships!) {
+      const reference = await Studio.findByPk(m.studioId);
+      expect(m.studio!.get({ plain: true })).toEqual(reference!.get({ plain: true }));
+      expect(m.studio!.createdAt).toBeInstanceOf(Date);
+    }
   });
 
   it('gives an empty list of roles to a person in no studio, and null for an unknown id', async () => {

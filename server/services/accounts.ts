@@ -5,7 +5,7 @@ import { Invitation, Membership, PasswordReset, Studio, User, sequelize } from '
 import { BadRequestError, ConflictError, ForbiddenError, GoneError, InvalidInputError, NotFoundError, NotSignedInError } from '../lib/errors';
 import { config } from '../config';
 import { retryOnUnique, violatedConstraint } from '../lib/unique';
-import { columnsOf, selectRows, stored } from '../lib/plain-rows';
+import { columnsOf, jsonOf, selectRows, stored, storedFromJson } from '../lib/plain-rows';
 import { studioAbilities } from '../policies';
 import { burnPasswordCheck, hashPassword, verifyPassword } from './passwords';
 import { hashToken, newToken } from './tokens';
@@ -21,8 +21,8 @@ const RESET_TTL_MS = 60 * 60_000;
 const INVITE_TTL_MS = 14 * 24 * 60 * 60_000;
 
 /**
- * The signed-in person with their roles, read on every request: one plain query, the roles
- * gathered by PostgreSQL's json_agg (see lib/plain-rows for why not Sequelize's include). The row
+ * The signed-in person with their roles and their studios, read on every request: one plain
+ * query, the roles gathered by PostgreSQL's json_agg (see lib/plain-rows for why not Sequelize's include). The row
  * is kept for a few seconds and forgotten as soon as the person or a membership of theirs changes
  * (services/signed-in-cache); each request gets model instances of its own.
  */
@@ -32,8 +32,9 @@ export async function findSignedInUser(id: string): Promise<User | null> {
     const mark = keptPeople.mark();
     [row] = await selectRows<SignedInRow>(
       `SELECT ${columnsOf(User, 'u')},
-              COALESCE(json_agg(json_build_object('id', m.id, 'studioId', m.studio_id, 'role', m.role)) FILTER (WHERE m.id IS NOT NULL), '[]'::json) AS memberships
-         FROM users u LEFT JOIN memberships m ON m.user_id = u.id
+              COALESCE(json_agg(json_build_object('id', m.id, 'studioId', m.studio_id, 'role', m.role, 'studio', ${jsonOf(Studio, 's')}))
+                         FILTER (WHERE m.id IS NOT NULL), '[]'::json) AS memberships
+         FROM users u LEFT JOIN memberships m ON m.user_id = u.id LEFT JOIN studios s ON s.id = m.studio_id
         WHERE u.id = $id
         GROUP BY u.id`,
       { id },
@@ -43,7 +44,11 @@ export async function findSignedInUser(id: string): Promise<User | null> {
   }
   const { memberships, ...attributes } = row;
   const user = stored(User, attributes);
-  user.memberships = memberships.map((m) => stored(Membership, { ...m, userId: id }));
+  user.memberships = memberships.map(({ studio, ...m }) => {
+    const membership = stored(Membership, { ...m, userId: id });
+    membership.studio = storedFromJson(Studio, studio);
+    return membership;
+  });
   return user;
 }
 

@@ -86,6 +86,25 @@ describe('the signed-in session and person, kept in memory', () => {
     expect((await maker.get('/api/auth/me')).status).toBe(401);
   });
 
+  it('a studio list sends one statement (the list): the studio comes with the signed-in person, and a renamed studio is heard', async () => {
+    const maker = await f.clientFor('maker');
+    const owner = await f.clientFor('owner');
+    const url = `/api/studios/${f.studio.id}`;
+    expect((await maker.get(`${url}/tutorials`)).status).toBe(200);
+    const n = await statementsDuring(async () => expect((await maker.get(`${url}/tutorials`)).status).toBe(200));
+    expect(n).toBe(1);
+    // Outsiders are answered without asking the database, with the same 404 as before.
+    const outsider = await f.clientFor('outsider');
+    expect((await outsider.get(url)).status).toBe(404);
+    expect(await statementsDuring(async () => expect((await outsider.get(url)).status).toBe(404))).toBe(0);
+
+    expect((await owner.patch(url, { name: 'Renamed through the app' })).status).toBe(200);
+    expect((await maker.get(url)).body.name).toBe('Renamed through the app');
+    await other.query(`UPDATE studios SET name = 'Renamed by hand' WHERE id = $1`, [f.studio.id]);
+    await heardEverything();
+    expect((await maker.get(url)).body.name).toBe('Renamed by hand');
+  });
+
   it('a password reset signs the person out everywhere at once (sessions ended by one statement)', async () => {
     const maker = await f.clientFor('maker');
     expect((await maker.get('/api/auth/me')).status).toBe(200);

@@ -2,17 +2,18 @@ import { LRUCache } from 'lru-cache';
 import type { InferAttributes, Model, Transaction } from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
 import type { ChannelHandler } from '../lib/change-listener';
-import { Membership, sequelize, User } from '../models';
+import { Membership, sequelize, Studio, User } from '../models';
 
 /**
  * Every signed-in request reads its session row and its person (with their roles) before it reads
  * what it asked for: two of a tutorial read's three queries (issue 16's profile). This process
- * keeps both for a few seconds, and forgets one the moment it changes anywhere:
+ * keeps both for a few seconds (the person with their memberships and studios), and forgets one
+ * the moment it changes anywhere:
  *  - database triggers (migration notify-signed-in-changes) NOTIFY `cardwright_signed_in` on commit
- *    of any change to a session, a person or a membership, from any process or script, and every
+ *    of any change to a session, a person, a membership or a studio, from any process or script, and every
  *    app process drops its copy when the notification arrives (milliseconds);
  *  - a change made in this process drops the copy before the request that made it answers (the
- *    session store's writes, model hooks on User and Membership, `forgetSessionsOf`), so the next
+ *    session store's writes, model hooks on User, Membership and Studio, `forgetSessionsOf`), so the next
  *    request here never reads it stale;
  *  - copies are kept only while this process listens (lib/change-listener): on connecting, and after
  *    a dropped connection, it forgets them all;
@@ -66,12 +67,17 @@ type KeptSession = { json: string; userId: string | undefined };
 
 export const keptSessions = new NotifiedCache<KeptSession>();
 /** A person's row with their memberships, as `findSignedInUser` reads it (built into fresh model instances each time). */
-export type SignedInRow = InferAttributes<User> & { memberships: { id: string; studioId: string; role: Role }[] };
+export type SignedInRow = InferAttributes<User> & { memberships: { id: string; studioId: string; role: Role; studio: Record<string, unknown> }[] };
 export const keptPeople = new NotifiedCache<SignedInRow>();
 
 /** Forgets every kept session of a person (their sessions were ended in the database). */
 export function forgetSessionsOf(userId: string): void {
   keptSessions.forgetWhere((s) => s.userId === userId);
+}
+
+/** Forgets the kept rows of a studio's members (they carry the studio). */
+function forgetMembersOf(studioId: string): void {
+  keptPeople.forgetWhere((p) => p.memberships.some((m) => m.studioId === studioId));
 }
 
 /** Forgets everything this process keeps of signed-in people (tests that change rows behind the app's back). */
@@ -111,6 +117,7 @@ export const signedInChanges: Record<string, ChannelHandler> = {
         heard.delete(payload.slice(6));
       } else if (payload.startsWith('s:')) keptSessions.forget(payload.slice(2));
       else if (payload.startsWith('u:')) keptPeople.forget(payload.slice(2));
+      else if (payload.startsWith('st:')) forgetMembersOf(payload.slice(3));
       else forgetSignedIn();
     },
     onListening: (on) => {
@@ -131,7 +138,10 @@ function whenCommitted(options: { transaction?: Transaction | null } | undefined
 
 let installed = false;
 
-/** Model hooks: a person or membership changed through Sequelize in this process is forgotten before the change's request answers. */
+/**
+ * Model hooks: a person, membership or studio changed through Sequelize in this process is
+ * forgotten before the change's request answers.
+ */
 export function watchSignedInRows(): void {
   if (installed) return;
   installed = true;
@@ -141,12 +151,13 @@ export function watchSignedInRows(): void {
     return undefined;
   };
   const onRow = (instance: Model, options: HookOptions) => {
+    if (instance instanceof Studio) return whenCommitted(options, () => forgetMembersOf(instance.id));
     const id = personOf(instance);
     if (id) whenCommitted(options, () => keptPeople.forget(id));
   };
   // An update or delete by a `where` cannot tell whose rows changed: forget everyone.
   const onBulk = (options: HookOptions) => {
-    if (options.model === User || options.model === Membership) whenCommitted(options, () => keptPeople.clear());
+    if (options.model === User || options.model === Membership || options.model === Studio) whenCommitted(options, () => keptPeople.clear());
   };
   sequelize.addHook('afterCreate', 'signedIn', onRow);
   sequelize.addHook('afterUpdate', 'signedIn', onRow);
