@@ -5,7 +5,7 @@
  * against two processes sharing the database, the connections split round-robin between them.
  *
  * Targets (issue 16; "today" = before the public-page cache and the lean session, measured on
- * this machine: health ~2,500/s, tutorial API ~300/s with p99 220 ms, public page ~150/s):
+ * this machine: health ~2,500/s with p99 33 ms, tutorial API ~300/s with p99 220 ms, public page ~150/s):
  *  - public page: at least 10x today's rate (>= 1,500/s, or 0.6x the health baseline of the same
  *    run when the machine is slower) and p99 under 50 ms;
  *  - signed-in API reads: at least 3x today's rate (>= 900/s, or 0.36x health) and p99 under 50 ms;
@@ -88,7 +88,8 @@ function report(target: Target, f: Figures, health: Figures): boolean {
     const rateOk = f.rps >= target.rate.floor || ratio >= target.rate.ofHealth;
     const p99Ok = f.p99 < 50;
     ok = ok && rateOk && p99Ok;
-    verdict = `  [rate >= ${target.rate.floor}/s or ${target.rate.ofHealth}x health: ${rateOk ? 'OK' : 'SLOW'}; p99 < 50 ms: ${p99Ok ? 'OK' : 'SLOW'}]`;
+    // The p99 beside health's own: on a slower machine a request that does no work has a long tail too.
+    verdict = `  [rate >= ${target.rate.floor}/s or ${target.rate.ofHealth}x health: ${rateOk ? 'OK' : 'SLOW'}; p99 < 50 ms: ${p99Ok ? 'OK' : 'SLOW'} (${(f.p99 / health.p99).toFixed(2)}x health's p99)]`;
   }
   console.log(`  ${target.name.padEnd(30)} ${fmt(f)}  (${ratio.toFixed(2)}x health)${verdict}${f.errors ? '  ERRORS' : ''}`);
   return ok;

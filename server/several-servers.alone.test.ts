@@ -191,4 +191,22 @@ describe('two app servers, one database, one bucket, one worker', () => {
     expect((await owner.send(a, 'PATCH', `/api/studios/${f.studio.id}`, { name })).status).toBe(200);
     await until('server b to show the new name', async () => (await reader.send(b, 'GET', here)).body.toString().includes(name), 5000);
   });
+
+  it('a member removed or signed out through one server is refused by the other, which had them kept', async () => {
+    const student = new Browser();
+    expect((await student.signIn(a, f.users.student.email)).status).toBe(200);
+    const url = `/api/studios/${f.studio.id}`;
+    for (let i = 0; i < 3; i++) expect((await student.send(b, 'GET', url)).status).toBe(200); // b keeps the person now
+    const owner = new Browser();
+    await owner.signIn(b, f.users.owner.email);
+    expect((await owner.send(b, 'GET', url)).status).toBe(200);
+    expect((await owner.send(a, 'DELETE', `${url}/members/${f.users.student.id}`)).status).toBe(204);
+    // b hears of the change by NOTIFY, milliseconds after a's commit.
+    await until('server b to refuse the removed member', async () => (await student.send(b, 'GET', url)).status === 404, 2000);
+    // The old cookie is sent again after signing out (as a thief who copied it would): b must refuse it.
+    const cookie = owner.cookie;
+    expect((await owner.send(a, 'POST', '/api/auth/sign-out')).status).toBe(204);
+    owner.cookie = cookie;
+    await until('server b to refuse the ended session', async () => (await owner.send(b, 'GET', url)).status === 401, 2000);
+  });
 });
