@@ -6,28 +6,12 @@ import { publicPageCacheState } from '@server/services/public-pages';
 import { heardEverything } from '@server/services/signed-in-cache';
 import { testApp } from '../../../tests/harness/app';
 import { makeStudio, type StudioFixture } from '../../../tests/harness/factories';
+import { statementsDuring } from '../../../tests/harness/sql';
 
 const app = testApp();
 let f: StudioFixture;
 let here: string;
 let piece: PieceRow;
-
-/** The SQL statements the app sends while `fn` runs (Sequelize and the session store both go through pg's Client). */
-async function queriesDuring(fn: () => Promise<unknown>): Promise<string[]> {
-  const seen: string[] = [];
-  const original = pg.Client.prototype.query;
-  pg.Client.prototype.query = function (this: pg.Client, ...args: unknown[]) {
-    const q = args[0] as string | { text: string };
-    seen.push(typeof q === 'string' ? q : q.text);
-    return Reflect.apply(original, this, args) as never;
-  } as typeof original;
-  try {
-    await fn();
-  } finally {
-    pg.Client.prototype.query = original;
-  }
-  return seen;
-}
 
 beforeAll(async () => {
   f = await makeStudio(app);
@@ -68,7 +52,7 @@ describe('the public page cache (issue 16)', () => {
     for (let i = 0; ; i++) {
       await anon.get(here).expect(200);
       const before = publicPageCacheState().generation;
-      const sql = await queriesDuring(() => anon.get(here).expect(200));
+      const sql = await statementsDuring(() => anon.get(here).expect(200));
       if (publicPageCacheState().generation !== before && i < 10) continue;
       expect(sql).toEqual([]);
       break;
@@ -134,7 +118,7 @@ describe('lean signed-in reads (issue 16)', () => {
     const maker = await f.clientFor('maker');
     await maker.get(`/api/tutorials/${f.tutorial.id}`).expect(200);
     await heardEverything(); // the sign-in's own notification, which forgets the session once more
-    const sql = await queriesDuring(async () => {
+    const sql = await statementsDuring(async () => {
       const res = await maker.get(`/api/tutorials/${f.tutorial.id}`).expect(200);
       expect(res.body.author).toEqual({ id: f.users.maker.id, name: 'Test maker' });
     });
