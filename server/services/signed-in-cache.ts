@@ -9,12 +9,12 @@ import { Membership, sequelize, Studio, User } from '../models';
  * what it asked for: two of a tutorial read's three queries (issue 16's profile). This process
  * keeps both for a few seconds (the person with their memberships and studios), and forgets one
  * the moment it changes anywhere:
- *  - database triggers (migration notify-signed-in-changes) NOTIFY `cardwright_signed_in` on commit
- *    of any change to a session, a person, a membership or a studio, from any process or script, and every
- *    app process drops its copy when the notification arrives (milliseconds);
+ *  - database triggers (migration notify-signed-in-changes) NOTIFY `cardwright_signed_in` on
+ *    commit of any change to a session, a person, a membership or a studio, from any process or
+ *    script, and every app process drops its copy when the notification arrives (milliseconds);
  *  - a change made in this process drops the copy before the request that made it answers (the
- *    session store's writes, model hooks on User, Membership and Studio, `forgetSessionsOf`), so the next
- *    request here never reads it stale;
+ *    session store's writes, model hooks on User, Membership and Studio, `forgetSessionsOf`), so
+ *    the next request here never reads it stale;
  *  - copies are kept only while this process listens (lib/change-listener): on connecting, and after
  *    a dropped connection, it forgets them all;
  *  - a read from the database that a change overtook is used once but not kept (a generation count);
