@@ -17,9 +17,9 @@ const MAX_REMEMBERED = 100_000;
 
 /**
  * Sessions in PostgreSQL (connect-pg-simple), read through `kept` and whose expiry is written at
- * most once a minute per session and process. express-session touches the store on every request of a rolling session,
- * and an UPDATE per API read cost more than the read itself; the 14-day expiry losing up to a
- * minute does not matter. Several app processes each touch on their own clock, still rarely.
+ * most once a minute per session and process. express-session touches the store on every request
+ * of a rolling session, and an UPDATE per API read cost more than the read itself; the 14-day
+ * expiry losing up to a minute does not matter. Several app processes each touch on their own clock, still rarely.
  * A session read from the table is kept (never past its cookie's expiry) and handed out as a
  * fresh object each time; this store's own writes forget it before they answer, and the keeper
  * hears of other processes' writes (see services/signed-in-cache.ts).
@@ -52,6 +52,8 @@ export function throttledPgStore(pool: pg.Pool, kept: SessionKeeper): session.St
     override set(sid: string, sess: SessionData, fn?: (err?: unknown) => void) {
       // A save writes the expiry too: it counts as a touch.
       lastTouch.set(sid, Date.now());
+      // Forgotten before the write (a read in flight is not kept) and after it (a read that began
+      // in between saw the old row).
       kept.forget(sid);
       super.set(sid, sess, (err?: unknown) => {
         kept.forget(sid);

@@ -5,6 +5,7 @@ import { Invitation, Membership, PasswordReset, Studio, User, sequelize } from '
 import { BadRequestError, ConflictError, ForbiddenError, GoneError, InvalidInputError, NotFoundError, NotSignedInError } from '../lib/errors';
 import { config } from '../config';
 import { retryOnUnique, violatedConstraint } from '../lib/unique';
+import { whenCommitted } from '../lib/when-committed';
 import { columnsOf, jsonOf, selectRows, stored, storedFromJson } from '../lib/plain-rows';
 import { studioAbilities } from '../policies';
 import { burnPasswordCheck, hashPassword, verifyPassword } from './passwords';
@@ -22,9 +23,10 @@ const INVITE_TTL_MS = 14 * 24 * 60 * 60_000;
 
 /**
  * The signed-in person with their roles and their studios, read on every request: one plain
- * query, the roles gathered by PostgreSQL's json_agg (see lib/plain-rows for why not Sequelize's include). The row
- * is kept for a few seconds and forgotten as soon as the person or a membership of theirs changes
- * (services/signed-in-cache); each request gets model instances of its own.
+ * query, the roles gathered by PostgreSQL's json_agg (see lib/plain-rows for why not Sequelize's
+ * include). The row is kept for a few seconds and forgotten as soon as the person, a membership
+ * of theirs or one of their studios changes (services/signed-in-cache); each request gets model
+ * instances of its own.
  */
 export async function findSignedInUser(id: string): Promise<User | null> {
   let row = keptPeople.get(id);
@@ -206,8 +208,7 @@ export async function resetPassword(token: string, password: string): Promise<Us
 export async function endSessionsOf(userId: string, transaction?: Transaction): Promise<void> {
   await sequelize.query(`DELETE FROM "session" WHERE sess->>'userId' = :userId`, { replacements: { userId }, transaction });
   // This process forgets them before the request answers; the others hear of it from the table's trigger.
-  if (transaction) transaction.afterCommit(() => forgetSessionsOf(userId));
-  else forgetSessionsOf(userId);
+  whenCommitted({ transaction }, () => forgetSessionsOf(userId));
 }
 
 /**

@@ -1,6 +1,7 @@
 import type { Model, Transaction } from 'sequelize';
 import { Article, Chapter, Material, PieceRow, Recording, sequelize, Still, Studio, Supply, Tutorial, User } from '../models';
 import type { ChannelHandler } from '../lib/change-listener';
+import { whenCommitted } from '../lib/when-committed';
 import { dropLocalPublicPage, publicPage, setListening } from './public-pages';
 
 /**
@@ -47,9 +48,7 @@ async function tutorialOf(model: unknown, row: Record<string, unknown>): Promise
 }
 
 function afterCommit(options: HookOptions | undefined, fn: () => Promise<void>) {
-  const run = () => void fn().catch((e: Error) => console.error('[public page]', e.message));
-  if (options?.transaction) options.transaction.afterCommit(run);
-  else run();
+  whenCommitted(options, () => void fn().catch((e: Error) => console.error('[public page]', e.message)));
 }
 
 const WATCHED = new Set<unknown>([Tutorial, Studio, PieceRow, Material, Supply, Article, Chapter, Still, Recording, User]);

@@ -2,6 +2,7 @@ import { LRUCache } from 'lru-cache';
 import type { InferAttributes, Model, Transaction } from 'sequelize';
 import type { Role } from '@shared/schemas/roles';
 import type { ChannelHandler } from '../lib/change-listener';
+import { whenCommitted } from '../lib/when-committed';
 import { Membership, sequelize, Studio, User } from '../models';
 
 /**
@@ -128,13 +129,7 @@ export const signedInChanges: Record<string, ChannelHandler> = {
   },
 };
 
-type HookOptions = { transaction?: Transaction | null; where?: unknown; model?: unknown };
-
-/** Runs `fn` once the change is committed: at once, or when its transaction commits. */
-function whenCommitted(options: { transaction?: Transaction | null } | undefined, fn: () => void): void {
-  if (options?.transaction) options.transaction.afterCommit(fn);
-  else fn();
-}
+type HookOptions = { transaction?: Transaction | null; model?: unknown };
 
 let installed = false;
 
