@@ -4,7 +4,7 @@ import { config } from '@server/config';
 import { testApp } from '../../tests/harness/app';
 import { makeStudio, type StudioFixture } from '../../tests/harness/factories';
 import { statementsDuring } from '../../tests/harness/sql';
-import { heardEverything, keptSessions, signedInCacheState } from './signed-in-cache';
+import { heardEverything, keptSessions, NotifiedCache, signedInCacheState } from './signed-in-cache';
 
 /**
  * The signed-in session and person kept in memory (issue 16): a signed-in read asks the database
@@ -90,5 +90,16 @@ describe('the signed-in session and person, kept in memory', () => {
     const { endSessionsOf } = await import('./accounts');
     await endSessionsOf(f.users.maker.id);
     expect((await maker.get('/api/auth/me')).status).toBe(401);
+  });
+});
+
+describe('NotifiedCache', () => {
+  it('forgets every entry a test picks, however many, and keeps the rest', () => {
+    const kept = new NotifiedCache<{ n: number }>();
+    kept.setListening(true);
+    for (let n = 0; n < 50; n++) kept.keep(`k${n}`, { n }, kept.mark());
+    kept.forgetWhere((v) => v.n % 2 === 1);
+    expect(kept.size).toBe(25);
+    for (let n = 0; n < 50; n++) expect(kept.get(`k${n}`)?.n).toBe(n % 2 === 0 ? n : undefined);
   });
 });

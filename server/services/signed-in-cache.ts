@@ -48,7 +48,9 @@ export class NotifiedCache<V extends object> {
   }
   forgetWhere(test: (value: V) => boolean): void {
     this.generation++;
-    for (const [key, value] of this.lru.entries()) if (test(value)) this.lru.delete(key);
+    // The keys first: deleting while the cache's own iterator runs could skip entries.
+    const gone = [...this.lru.entries()].filter(([, value]) => test(value)).map(([key]) => key);
+    for (const key of gone) this.lru.delete(key);
   }
   clear(): void {
     this.generation++;
