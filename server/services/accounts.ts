@@ -204,6 +204,25 @@ export async function resetPassword(token: string, password: string): Promise<Us
   return user;
 }
 
+/**
+ * A signed-in person changes their password, proving the current one (a session left open on
+ * someone else's computer must not be enough). Every session of theirs ends, as after a reset;
+ * the route starts a fresh one for the browser that asked.
+ */
+export async function changePassword(userId: string, currentPassword: string, password: string): Promise<User> {
+  const user = await User.findByPk(userId);
+  if (!user) throw new NotSignedInError();
+  if (!(await verifyPassword(currentPassword, user.passwordHash))) {
+    throw new InvalidInputError([{ path: 'currentPassword', message: 'Not your current password' }], 'That is not your current password');
+  }
+  const passwordHash = await hashPassword(password);
+  await sequelize.transaction(async (transaction) => {
+    await user.update({ passwordHash }, { transaction });
+    await endSessionsOf(user.id, transaction);
+  });
+  return user;
+}
+
 /** Ends every stored session of a person (express-session keeps them in the `session` table). */
 export async function endSessionsOf(userId: string, transaction?: Transaction): Promise<void> {
   await sequelize.query(`DELETE FROM "session" WHERE sess->>'userId' = :userId`, { replacements: { userId }, transaction });

@@ -35,6 +35,11 @@ export const resetRequestSchema = z.object({ email: emailSchema });
 export const resetSchema = z.object({ token: z.string().min(10, 'The link is incomplete'), password: passwordSchema });
 export type ResetRequestInput = z.input<typeof resetRequestSchema>;
 export type ResetInput = z.input<typeof resetSchema>;
+/** `POST /api/auth/password`: a signed-in person changes their password, proving the current one. */
+export const changePasswordSchema = z
+  .object({ currentPassword: z.string().min(1, 'Enter your current password').max(200), password: passwordSchema })
+  .refine((v) => v.password !== v.currentPassword, { path: ['password'], message: 'That is your current password; choose a new one' });
+export type ChangePasswordInput = z.input<typeof changePasswordSchema>;
 export const acceptInvitationSchema = z.object({ token: z.string().min(10) });
 
 /** A studio the signed-in person belongs to, with their role there and what the navigation offers (the studio policy decides). */
@@ -53,7 +58,7 @@ export type InvitationPreviewDto = { email: string; role: Role; studio: { id: st
 export type InvitationAcceptedDto = { studioId: string; studios: StudioMembershipDto[] };
 /** `GET /api/auth/demo`: the demo people the sign-in page lists while the demo studio exists. */
 export type DemoDto = { present: boolean; password?: string; people: { email: string; name: string; role: Role }[] };
-/** Sign-up, sign-in and a password reset: the person, and the CSRF token of their new session. */
+/** Sign-up, sign-in, a password reset or change: the person, and the CSRF token of their new session. */
 export type SignedInDto = MeDto & { csrfToken: string };
 /** `POST /api/auth/reset-request`: the same sentence whether or not the address has an account. */
 export type ResetRequestedDto = { message: string };

@@ -51,6 +51,7 @@ export const router = createBrowserRouter([
       { path: '/studios/:studioId/board', lazy: async () => ({ Component: (await import('./routes/board')).BoardRoute }) },
       { path: '/studios/:studioId/briefs', lazy: async () => ({ Component: (await import('./routes/briefs')).BriefsRoute }) },
       { path: '/classes/:classId', lazy: async () => ({ Component: (await import('./routes/class')).ClassRoute }) },
+      { path: '/account', lazy: async () => ({ Component: (await import('./routes/account')).AccountRoute }) },
       { path: '/outbox', lazy: async () => ({ Component: (await import('./routes/outbox')).OutboxRoute }) },
       { path: '/outbox/:messageId', lazy: async () => ({ Component: (await import('./routes/outbox')).OutboxRoute }) },
       {

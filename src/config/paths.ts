@@ -9,6 +9,7 @@ export const paths = {
   studio: (studioId: string) => `/studios/${studioId}`,
   members: (studioId: string) => `/studios/${studioId}/members`,
   mailSettings: (studioId: string) => `/studios/${studioId}/mail-settings`,
+  account: () => '/account',
   outbox: () => '/outbox',
   outboxMessage: (id: string) => `/outbox/${id}`,
   /** Served by the server itself (not a client route): every caught message, this computer only. */

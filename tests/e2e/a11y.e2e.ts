@@ -108,6 +108,7 @@ describe('every page of the demo, at 1280, 768 and 390 px', () => {
       { name: 'studio', url: `/studios/${ids.studio}`, ready: heading('Tutorials') },
       { name: 'members', url: `/studios/${ids.studio}/members`, ready: heading(/members/i) },
       { name: 'outbox', url: '/outbox', ready: heading(/outbox/i) },
+      { name: 'account', url: '/account', ready: heading('Your account') },
       { name: 'outbox-message', url: message, ready: (p) => p.getByRole('link', { name: /\/reset\// }).waitFor() },
       { name: 'print-view', url: `/print/${ids.box}?paper=a4`, ready: heading('Round keepsake box with a wrapped lid') },
       { name: 'not-found', url: '/no-such-page', ready: heading('This page does not exist') },

@@ -100,4 +100,40 @@ describe('accounts in the browser', () => {
     await shot(page, 'sign-in-next-outbox');
     await ctx.close();
   });
+
+  it('changes the password on the Account page: a wrong current one is named, the new one signs in, the old one no longer does', async () => {
+    const ctx = await browser.context();
+    const page = await ctx.newPage();
+    const email = `account-${Date.now()}@e2e.example`;
+    const first = 'scored and folded twice over';
+    const second = 'a quieter passphrase for cards';
+    await page.goto('/sign-up');
+    await page.getByLabel('Your name').fill('Ines Calder');
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill(first);
+    await page.getByLabel('Studio name').fill('Calder Cards');
+    await page.getByRole('button', { name: 'Create account' }).click();
+    await page.waitForURL(/\/studios\//);
+
+    await page.getByRole('link', { name: 'Account' }).click();
+    await page.waitForURL(/\/account$/);
+    await page.getByLabel('Current password').fill('not my password at all');
+    await page.getByLabel('New password').fill(second);
+    await page.getByRole('button', { name: 'Change password' }).click();
+    await expect.poll(() => page.getByText('Not your current password', { exact: true }).isVisible()).toBe(true);
+    await page.getByLabel('Current password').fill(first);
+    await page.getByRole('button', { name: 'Change password' }).click();
+    await expect.poll(() => page.getByText('Your password is changed').isVisible()).toBe(true);
+    await shot(page, 'account-password-changed');
+
+    // Still signed in (a new session with its own token): signing out works, then only the new password signs in.
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/\/sign-in/);
+    await page.getByLabel('E-mail').fill(email);
+    await page.getByLabel('Password').fill(first);
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    await expect.poll(() => page.getByText(/do not match/i).isVisible()).toBe(true);
+    await signIn(page, email, second);
+    await ctx.close();
+  });
 });

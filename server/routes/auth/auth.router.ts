@@ -1,6 +1,7 @@
 import { Router, type Request, type Response } from 'express';
 import rateLimit from 'express-rate-limit';
 import {
+  changePasswordSchema,
   resetRequestSchema,
   resetSchema,
   signInSchema,
@@ -13,12 +14,12 @@ import {
 } from '@shared/schemas/auth';
 import type { User } from '../../models';
 import type { Config } from '../../config';
-import { openRoute } from '../../lib/route';
+import { openRoute, route } from '../../lib/route';
 import { connectionOf } from '../../lib/connection';
 import { mailboxAbilities } from '../../policies';
 import { errorBody, NotSignedInError } from '../../lib/errors';
 import { sessionCsrfToken } from '../../middlewares/csrf';
-import { resetPassword, startPasswordReset, signIn, signUp, studiosOf } from '../../services/accounts';
+import { changePassword, resetPassword, startPasswordReset, signIn, signUp, studiosOf } from '../../services/accounts';
 import { DEMO_PASSWORD, DEMO_PEOPLE, demoPresent } from '../../seed';
 
 /** Starts a fresh session for the person (OWASP Session Management: new id at sign-in). */
@@ -41,7 +42,7 @@ async function me(user: User, req: Request, config: Pick<Config, 'env' | 'mail'>
   return { user: user.toPublic(), studios, outbox, devMailbox };
 }
 
-/** Sign-up, sign-in, sign-out, the CSRF token, the current person and password resets. */
+/** Sign-up, sign-in, sign-out, the CSRF token, the current person, password resets and changes. */
 export function authRouter(opts: {
   signInLimit: number;
   signUpTakenLimit: number;
@@ -157,6 +158,17 @@ export function authRouter(opts: {
       const user = await resetPassword(body.token, body.password);
       const csrf = await startSession(req, user.id);
       res.json({ ...(await me(user, req, opts.config)), csrfToken: csrf } satisfies SignedInDto);
+    }),
+  );
+
+  // The sign-in limit applies: a wrong current password is a guess at it.
+  r.post(
+    '/password',
+    limiter,
+    route({ body: changePasswordSchema }, async ({ body, user, req, res }) => {
+      const changed = await changePassword(user.id, body.currentPassword, body.password);
+      const csrf = await startSession(req, changed.id);
+      res.json({ ...(await me(changed, req, opts.config)), csrfToken: csrf } satisfies SignedInDto);
     }),
   );
 

@@ -166,6 +166,57 @@ describe('password reset by e-mail', () => {
   });
 });
 
+describe('POST /api/auth/password (change it while signed in)', () => {
+  const NEW = 'a changed passphrase for cards';
+
+  it('401 signed out; 400 naming the field for a wrong current password, a short or common new one, or the same one', async () => {
+    const token = await new TestClient(app).token();
+    expect(
+      (await new TestClient(app).agent.post('/api/auth/password').set('X-CSRF-Token', token).send({ currentPassword: TEST_PASSWORD, password: NEW })).status,
+    ).toBe(403);
+    const anon = new TestClient(app);
+    expect((await anon.post('/api/auth/password', { currentPassword: TEST_PASSWORD, password: NEW })).status).toBe(401);
+
+    const u = await makeUser();
+    const c = new TestClient(app);
+    await c.signIn(u.email, TEST_PASSWORD);
+    const wrong = await c.post('/api/auth/password', { currentPassword: 'not the password at all', password: NEW });
+    expect(wrong.status).toBe(400);
+    expect(wrong.body.issues).toEqual([{ path: 'currentPassword', message: 'Not your current password' }]);
+    // NIST SP 800-63B-4 (at least 15 characters, common ones refused), as at sign-up
+    const short = await c.post('/api/auth/password', { currentPassword: TEST_PASSWORD, password: 'short' });
+    expect(short.status).toBe(400);
+    expect(short.body.issues[0].path).toBe('password');
+    expect((await c.post('/api/auth/password', { currentPassword: TEST_PASSWORD, password: 'passwordpassword' })).status).toBe(400);
+    const same = await c.post('/api/auth/password', { currentPassword: TEST_PASSWORD, password: TEST_PASSWORD });
+    expect(same.status).toBe(400);
+    expect(same.body.issues[0].path).toBe('password');
+    // nothing changed: the old password still signs in, and this browser is still signed in
+    expect((await new TestClient(app).signIn(u.email, TEST_PASSWORD)).status).toBe(200);
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+  });
+
+  it('changes it, signs every other session out, and keeps this browser signed in with a new session', async () => {
+    const u = await makeUser();
+    const elsewhere = new TestClient(app);
+    await elsewhere.signIn(u.email, TEST_PASSWORD);
+    const c = new TestClient(app);
+    await c.signIn(u.email, TEST_PASSWORD);
+    const res = await c.post('/api/auth/password', { currentPassword: TEST_PASSWORD, password: NEW });
+    expect(res.status).toBe(200);
+    expect(res.body.user.email).toBe(u.email);
+    expect(res.body.csrfToken).toEqual(expect.any(String));
+    // Its old session ended with the others: it is still signed in only through the new one it was given.
+    expect(String(res.headers['set-cookie'])).toContain('cardwright.sid=');
+    c.csrf = res.body.csrfToken;
+    expect((await c.get('/api/auth/me')).status).toBe(200);
+    expect((await c.post('/api/auth/sign-out')).status).toBe(204);
+    expect((await elsewhere.get('/api/auth/me')).status).toBe(401);
+    expect((await new TestClient(app).signIn(u.email, NEW)).status).toBe(200);
+    expect((await new TestClient(app).signIn(u.email, TEST_PASSWORD)).status).toBe(401);
+  });
+});
+
 describe('GET /api/health', () => {
   it('answers 200 with the database state', async () => {
     const res = await new TestClient(app).get('/api/health');

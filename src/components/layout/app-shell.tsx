@@ -106,6 +106,9 @@ export function AppShell({ me, currentStudioId, onSignOut }: { me: Me; currentSt
             </nav>
             <div className="flex items-center justify-between gap-3 text-sm lg:ml-auto lg:justify-start">
               <span className="text-pencil">{me.user.name}</span>
+              <NavLink to={paths.account()} className={navClass}>
+                Account
+              </NavLink>
               {studioId && (
                 <NavLink to={paths.mailSettings(studioId)} className={navClass}>
                   E-mail settings

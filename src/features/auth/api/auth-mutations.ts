@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { MeDto, ResetInput, ResetRequestedDto, ResetRequestInput, SignedInDto, SignInInput, SignUpInput } from '@shared/schemas/auth';
+import type { ChangePasswordInput, MeDto, ResetInput, ResetRequestedDto, ResetRequestInput, SignedInDto, SignInInput, SignUpInput } from '@shared/schemas/auth';
 import { api, setCsrfToken } from '@/lib/api-client';
 import { authKeys } from './keys';
 
@@ -29,6 +29,19 @@ export const resetPassword = (input: ResetInput) => api<SignedInDto>('/auth/rese
 export function useResetPassword() {
   const started = useSessionStarted();
   return useMutation({ mutationFn: resetPassword, onSuccess: started });
+}
+
+export const changePassword = (input: ChangePasswordInput) => api<SignedInDto>('/auth/password', { method: 'POST', body: input });
+/** The password changes and the session is a new one: keep its token and the person (the cached reads stay true). */
+export function useChangePassword() {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: changePassword,
+    onSuccess: (me) => {
+      setCsrfToken(me.csrfToken);
+      qc.setQueryData<MeDto>(authKeys.me(), { user: me.user, studios: me.studios, outbox: me.outbox, devMailbox: me.devMailbox });
+    },
+  });
 }
 
 export const requestReset = (input: ResetRequestInput) => api<ResetRequestedDto>('/auth/reset-request', { method: 'POST', body: input });
